@@ -1,0 +1,105 @@
+import { createReadStream, createWriteStream, type WriteStream } from 'node:fs';
+import { rename, stat, unlink } from 'node:fs/promises';
+import { basename, dirname, join } from 'node:path';
+import type { Readable, Writable } from 'node:stream';
+
+/** The streams a CLI run talks through; tests pass their own. */
+export interface CliIO {
+  stdin: Readable;
+  stdout: Writable;
+  stderr: Writable & { isTTY?: boolean; columns?: number };
+  /** Directory relative paths are resolved against; default the process's. */
+  cwd?: string;
+}
+
+/** An input file as the user named it, and its bytes. */
+export interface Input {
+  /** The name as given (`-` for standard input). */
+  name: string;
+  /** Bytes, read lazily. */
+  bytes: () => AsyncIterable<Buffer | string>;
+  /** Size in bytes when known (files), for the progress bar. */
+  size?: number;
+}
+
+/** Resolves input names to inputs; unreadable ones are returned as messages instead. */
+export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: Input[]; failures: string[] }> {
+  const inputs: Input[] = [];
+  const failures: string[] = [];
+  for (const name of names) {
+    if (name === '-') {
+      inputs.push({ name, bytes: () => io.stdin });
+      continue;
+    }
+    const path = io.cwd ? join(io.cwd, name) : name;
+    try {
+      const info = await stat(path);
+      if (info.isDirectory()) {
+        failures.push(`cannot read "${name}": it is a directory`);
+        continue;
+      }
+      inputs.push({ name, bytes: () => createReadStream(path), size: info.size });
+    } catch (error) {
+      failures.push(`cannot read "${name}": ${describeError(error)}`);
+    }
+  }
+  return { inputs, failures };
+}
+
+/** A short reason for a file-system error. */
+export function describeError(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException)?.code;
+  if (code === 'ENOENT') return 'no such file';
+  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
+  if (code === 'EISDIR') return 'it is a directory';
+  return error instanceof Error ? error.message : String(error);
+}
+
+/**
+ * Where a command's output goes: standard output, or a file written
+ * atomically (a temporary file beside it, renamed into place only when the
+ * command finished writing, so a failed run never leaves half a file).
+ */
+export class Output {
+  private file: WriteStream | undefined;
+  private failure: unknown;
+
+  private constructor(
+    private readonly stream: Writable,
+    private readonly target?: string,
+    private readonly temporary?: string,
+  ) {
+    if (stream !== undefined && temporary) {
+      this.file = stream as WriteStream;
+      this.file.on('error', (error) => (this.failure = error));
+    }
+  }
+
+  static to(path: string | undefined, io: CliIO): Output {
+    if (path === undefined || path === '-') return new Output(io.stdout);
+    const target = io.cwd ? join(io.cwd, path) : path;
+    const temporary = join(dirname(target), `.${basename(target)}.tmp-${process.pid}-${Date.now()}`);
+    return new Output(createWriteStream(temporary), target, temporary);
+  }
+
+  /** Writes text, waiting when the stream asks for it. */
+  async write(text: string): Promise<void> {
+    if (this.failure) throw this.failure;
+    if (!this.stream.write(text)) await new Promise<void>((resolve) => this.stream.once('drain', resolve));
+  }
+
+  /** Finishes the output: a file is moved into place. */
+  async commit(): Promise<void> {
+    if (!this.file || !this.target || !this.temporary) return;
+    await new Promise<void>((resolve, reject) => this.file!.end((error?: Error | null) => (error ? reject(error) : resolve())));
+    if (this.failure) throw this.failure;
+    await rename(this.temporary, this.target);
+  }
+
+  /** Abandons the output: a temporary file is removed, the target left as it was. */
+  async abandon(): Promise<void> {
+    if (!this.file || !this.temporary) return;
+    await new Promise<void>((resolve) => this.file!.end(() => resolve()));
+    await unlink(this.temporary).catch(() => undefined);
+  }
+}

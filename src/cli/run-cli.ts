@@ -1,0 +1,49 @@
+import { Command, CommanderError } from 'commander';
+import { registerRewrite } from './commands/rewrite.js';
+import { registerValidate } from './commands/validate.js';
+import { ExitCode, type CommandResult } from './exit-codes.js';
+import { describeError, type CliIO } from './io.js';
+import { version } from '../version.js';
+
+/**
+ * Runs treebridge with the given arguments (without `node` and the script) and
+ * streams, and resolves to the exit code: 0 ok, 1 findings, 2 usage or I/O
+ * error. Never calls process.exit, so tests can call it directly.
+ */
+export async function runCli(argv: string[], io: CliIO): Promise<number> {
+  let result: CommandResult = { code: ExitCode.Ok };
+  const done = (outcome: CommandResult) => (result = outcome);
+  const program = new Command('treebridge')
+    .description('read, check and convert syntactically annotated corpora')
+    .version(version, '-V, --version')
+    .showHelpAfterError('(run with --help for usage)')
+    .exitOverride()
+    .configureOutput({
+      writeOut: (text) => io.stdout.write(text),
+      writeErr: (text) => io.stderr.write(text),
+    });
+  registerValidate(program, io, done);
+  registerRewrite(program, io, done);
+  for (const command of program.commands) {
+    command.exitOverride().showHelpAfterError('(run with --help for usage)').configureOutput({
+      writeOut: (text) => io.stdout.write(text),
+      writeErr: (text) => io.stderr.write(text),
+    });
+  }
+  try {
+    if (argv.length === 0) {
+      program.outputHelp();
+      return ExitCode.UsageOrIO;
+    }
+    await program.parseAsync(argv, { from: 'user' });
+  } catch (error) {
+    if (error instanceof CommanderError) {
+      const informational = ['commander.helpDisplayed', 'commander.version', 'commander.help'];
+      return informational.includes(error.code) ? ExitCode.Ok : ExitCode.UsageOrIO;
+    }
+    io.stderr.write(`treebridge: ${describeError(error)}\n`);
+    return ExitCode.UsageOrIO;
+  }
+  for (const message of result.messages ?? []) io.stderr.write(`treebridge: ${message}\n`);
+  return result.code;
+}

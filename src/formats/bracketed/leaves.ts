@@ -1,0 +1,56 @@
+/**
+ * Reading and writing leaves: empty-element recognition, bracket escapes and
+ * `form-lemma` splitting. The empty-element shapes follow the bracketing
+ * conventions (Bies et al. 1995, from memory; ../shared/CHECK-VALUES.md §8):
+ * `*T*-1`, `*ICH*-2`, `*EXP*-1`, `*RNR*-1`, `*U*`, `*PRO*`, `*`, `*-1`, `0`,
+ * and the lower-case kinds of historical corpora (`*pro*`, `*con*`, `*exp*`).
+ */
+
+const STARRED = /^(\*[^*\s]*\*|\*)(?:-(\d+))?$/;
+const NONE = '-NONE-';
+
+/** The parts of an empty element's leaf, or undefined when the leaf is a word. */
+export function readEmptyLeaf(
+  text: string,
+  tag: string,
+  isLiteralTag: (tag: string) => boolean,
+): { kind: string; refIndex?: number } | undefined {
+  if (tag !== NONE && isLiteralTag(tag)) return undefined;
+  const starred = STARRED.exec(text);
+  if (starred) {
+    return starred[2] === undefined ? { kind: starred[1]! } : { kind: starred[1]!, refIndex: Number(starred[2]) };
+  }
+  if (text === '0') return { kind: '0' };
+  if (tag === NONE) {
+    // Under -NONE- every leaf is empty, whatever its shape: keep an index if it has one.
+    const indexed = /^(.*\S)-(\d+)$/.exec(text);
+    return indexed ? { kind: indexed[1]!, refIndex: Number(indexed[2]) } : { kind: text };
+  }
+  return undefined;
+}
+
+/** Builds the test for literal tags: the listed ones and every tag starting `NUM`. */
+export function literalTagTest(tags: string[]): (tag: string) => boolean {
+  const set = new Set(tags);
+  return (tag) => set.has(tag) || tag.startsWith('NUM');
+}
+
+/** Undoes `\(`, `\)` and `\\`; other backslashes are literal. */
+export function unescapeLeaf(text: string): string {
+  return text.includes('\\') ? text.replace(/\\([()\\])/g, '$1') : text;
+}
+
+/** Escapes brackets and backslashes so that the leaf reads back as it is. */
+export function escapeLeaf(text: string): string {
+  return /[()\\]/.test(text) ? text.replace(/[()\\]/g, '\\$&') : text;
+}
+
+/**
+ * Splits `form-lemma` at the last hyphen that has something after it (so `---`
+ * is form `-`, lemma `-`); undefined when there is no lemma part.
+ */
+export function splitLemma(text: string): { form: string; lemma: string } | undefined {
+  const hyphen = text.lastIndexOf('-', text.length - 2);
+  if (hyphen <= 0) return undefined;
+  return { form: text.slice(0, hyphen), lemma: text.slice(hyphen + 1) };
+}

@@ -1,0 +1,115 @@
+import { createReadStream } from 'node:fs';
+import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
+import { parse, SyntaxError as GrammarError } from '../../generated/bracketed-parser.js';
+import type { Tree } from '../../model/constituency.js';
+import { buildTree } from './build-tree.js';
+import { resolveReadOptions, type BracketedReadOptions, type ResolvedReadOptions } from './read-options.js';
+import { TreeSplitter, type TreeChunk } from './split-trees.js';
+
+/**
+ * Reads bracketed trees from text that arrives in pieces, one tree at a time:
+ * memory holds the tree being read, never the whole input. Trees that cannot be
+ * read are reported through `report` and skipped; reading goes on with the next.
+ */
+export async function* readBracketed(
+  pieces: AsyncIterable<string> | Iterable<string>,
+  options: BracketedReadOptions,
+  report: Report,
+): AsyncGenerator<Tree> {
+  const reader = new PieceReader(resolveReadOptions(options), report);
+  for await (const piece of pieces) {
+    reader.push(piece);
+    yield* reader.take();
+  }
+  reader.end();
+  yield* reader.take();
+}
+
+/** Reads every tree of a string at once, for tests and small inputs. */
+export function readBracketedText(text: string, options: BracketedReadOptions, report: Report): Tree[] {
+  const reader = new PieceReader(resolveReadOptions(options), report);
+  reader.push(text);
+  reader.end();
+  return reader.take();
+}
+
+/** Reads a file as a stream of trees; `onBytes` hears how many bytes have been read so far. */
+export function readBracketedFile(
+  path: string,
+  options: BracketedReadOptions,
+  report: Report,
+  onBytes?: (bytes: number) => void,
+): AsyncGenerator<Tree> {
+  return readBracketed(decodeStream(createReadStream(path), onBytes), { ...options, file: options.file ?? path }, report);
+}
+
+/** Decodes a byte stream as UTF-8, piece by piece (characters split between pieces are joined). */
+export async function* decodeStream(
+  bytes: AsyncIterable<Buffer | string>,
+  onBytes?: (bytes: number) => void,
+): AsyncGenerator<string> {
+  const decoder = new TextDecoder('utf-8', { ignoreBOM: true });
+  let total = 0;
+  for await (const piece of bytes) {
+    if (typeof piece === 'string') {
+      yield piece;
+      continue;
+    }
+    total += piece.length;
+    onBytes?.(total);
+    yield decoder.decode(piece, { stream: true });
+  }
+  const rest = decoder.decode();
+  if (rest) yield rest;
+}
+
+class PieceReader {
+  private readonly splitter: TreeSplitter;
+  private ready: Tree[] = [];
+
+  constructor(
+    private readonly options: ResolvedReadOptions,
+    private readonly report: Report,
+  ) {
+    const splitOptions = { treeBreaks: options.treeBreaks, maxTreeLength: options.maxTreeLength, maxDepth: options.maxDepth };
+    this.splitter = new TreeSplitter(options.file, (chunk) => this.read(chunk), report, splitOptions);
+  }
+
+  push(piece: string): void {
+    this.splitter.push(piece);
+  }
+
+  end(): void {
+    this.splitter.end();
+  }
+
+  take(): Tree[] {
+    const trees = this.ready;
+    this.ready = [];
+    return trees;
+  }
+
+  private read(chunk: TreeChunk): void {
+    const place = { file: this.options.file, offset: chunk.offset, lines: chunk.lines };
+    const replacement = chunk.text.indexOf('\uFFFD');
+    if (replacement !== -1) {
+      this.report(
+        diagnose('invalid-encoding', 'bytes that are not valid UTF-8 (shown as U+FFFD); the tree is skipped', {
+          ...place,
+          offset: chunk.offset + replacement,
+        }),
+      );
+      return;
+    }
+    let raw;
+    try {
+      raw = parse(chunk.text);
+    } catch (error) {
+      if (!(error instanceof GrammarError)) throw error;
+      this.report(diagnose('bad-bracketing', error.message, { ...place, offset: chunk.offset + error.location.start.offset }));
+      return;
+    }
+    const tree = buildTree(raw, place, this.options, this.report);
+    if (tree) this.ready.push(tree);
+  }
+}

@@ -1,0 +1,250 @@
+import { diagnose, type Diagnostic } from '../../diagnostics/diagnostic.js';
+import type { DiagnosticCode } from '../../diagnostics/codes.js';
+import { LineIndex } from '../../model/line-index.js';
+import type { Point } from '../../model/position.js';
+
+/**
+ * Where a new top-level tree may begin.
+ * - `first-column`: an opening bracket in the first column of a line always
+ *   starts a new tree, so a tree that is not closed is reported and reading
+ *   resumes with the next one. Right for every layout where inner brackets are
+ *   indented or share a line with their parent.
+ * - `brackets`: only bracket balance counts (any layout at all); an unclosed
+ *   tree then runs to the end of the file.
+ */
+export type TreeBreaks = 'first-column' | 'brackets';
+
+export interface SplitOptions {
+  /** Where trees may begin; default `first-column`. */
+  treeBreaks?: TreeBreaks;
+  /** Largest tree accepted, in characters; default 16 Mi. */
+  maxTreeLength?: number;
+  /** Deepest bracket nesting accepted; default 2000. */
+  maxDepth?: number;
+}
+
+/** One top-level bracket cut from the input, with what is needed to locate its parts. */
+export interface TreeChunk {
+  /** The text from the opening bracket to its matching closing bracket. */
+  text: string;
+  /** File offset of the opening bracket. */
+  offset: number;
+  /** Lines and columns for the chunk (and the start of its first line). */
+  lines: LineIndex;
+}
+
+const OPEN = 40; // (
+const CLOSE = 41; // )
+const BACKSLASH = 92;
+const NEWLINE = 10;
+
+function isSpace(code: number): boolean {
+  return code === 32 || code === 9 || code === 10 || code === 13 || code === 12 || code === 11;
+}
+
+/**
+ * Cuts a stream of text into top-level trees. Text arrives in pieces of any
+ * size (`push`), trees leave through `onTree` as soon as they close, and what
+ * cannot be a tree leaves through `onProblem`; nothing is thrown and nothing is
+ * dropped without a diagnostic. Memory holds one tree and one line at most.
+ */
+export class TreeSplitter {
+  private buffer = '';
+  /** File offset of buffer[0]. */
+  private bufferOffset = 0;
+  /** Next buffer index to scan. */
+  private scan = 0;
+  /** Column of buffer[0]. */
+  private bufferStartColumn = 1;
+  /** Line number of the character at `scan`, and the file offset where that line starts. */
+  private line = 1;
+  private lineStart = 0;
+  private depth = 0;
+  /** Offsets of the brackets open in the current tree, innermost last. */
+  private openOffsets: number[] = [];
+  /** Buffer index, point and line-start offset of the current tree's opening bracket; -1 outside trees. */
+  private treeStart = -1;
+  private treeStartPoint: Point = { offset: 0, line: 1, column: 1 };
+  private treeLineStart = 0;
+  /** The kind of stray text being skipped between trees, so a run is reported once. */
+  private stray: 'text' | 'close' | null = null;
+  /** Set while skipping a tree already reported as too large. */
+  private skipping = false;
+  private first = true;
+  private readonly treeBreaks: TreeBreaks;
+  private readonly maxTreeLength: number;
+  private readonly maxDepth: number;
+
+  constructor(
+    private readonly file: string,
+    private readonly onTree: (chunk: TreeChunk) => void,
+    private readonly onProblem: (diagnostic: Diagnostic) => void,
+    options: SplitOptions = {},
+  ) {
+    this.treeBreaks = options.treeBreaks ?? 'first-column';
+    this.maxTreeLength = options.maxTreeLength ?? 16 * 1024 * 1024;
+    this.maxDepth = options.maxDepth ?? 2000;
+  }
+
+  /** Feeds the next piece of decoded text. */
+  push(piece: string): void {
+    if (this.first) {
+      this.first = false;
+      if (piece.charCodeAt(0) === 0xfeff) piece = piece.slice(1);
+    }
+    this.buffer += piece;
+    this.run(false);
+    this.compact();
+  }
+
+  /** Ends the input: an open tree is reported as unclosed. */
+  end(): void {
+    this.run(true);
+    if (this.treeStart !== -1 || this.skipping) {
+      if (!this.skipping) this.reportUnclosed('at the end of the input');
+      this.treeStart = -1;
+      this.skipping = false;
+    }
+    this.buffer = '';
+  }
+
+  private run(final: boolean): void {
+    const buffer = this.buffer;
+    let i = this.scan;
+    for (; i < buffer.length; i++) {
+      const code = buffer.charCodeAt(i);
+      if (code === NEWLINE) {
+        this.line++;
+        this.lineStart = this.bufferOffset + i + 1;
+        continue;
+      }
+      if (this.depth === 0) {
+        if (code === OPEN) {
+          this.stray = null;
+          this.openTree(i);
+        } else if (code === CLOSE) {
+          this.scan = i;
+          if (this.stray !== 'close') this.report('unmatched-close', i, 'closing bracket with no tree open');
+          this.stray = 'close';
+        } else if (!isSpace(code)) {
+          if (this.stray !== 'text') {
+            this.scan = i;
+            this.report('text-outside-tree', i, `text outside any tree: "${this.wordAt(i)}"`);
+          }
+          this.stray = 'text';
+        } else if (this.stray === 'close') {
+          this.stray = null;
+        }
+        continue;
+      }
+      if (code === BACKSLASH) {
+        if (i + 1 >= buffer.length && !final) break; // the escaped character has not arrived yet
+        const next = buffer.charCodeAt(i + 1);
+        if (next === OPEN || next === CLOSE || next === BACKSLASH) i++;
+        continue;
+      }
+      if (code === OPEN) {
+        if (this.treeBreaks === 'first-column' && this.bufferOffset + i === this.lineStart) {
+          this.scan = i;
+          if (!this.skipping) this.reportUnclosed(`before the next tree at line ${this.line}`);
+          this.skipping = false;
+          this.openTree(i);
+          continue;
+        }
+        this.depth++;
+        if (!this.skipping) this.openOffsets.push(this.bufferOffset + i);
+        if (this.depth > this.maxDepth && !this.skipping) {
+          this.scan = i;
+          this.report('tree-too-large', this.treeStart, `tree nested deeper than ${this.maxDepth} brackets; skipped`);
+          this.skipping = true;
+        }
+      } else if (code === CLOSE) {
+        this.depth--;
+        if (!this.skipping) this.openOffsets.pop();
+        if (this.depth === 0) this.closeTree(i);
+      }
+    }
+    this.scan = i;
+    if (this.treeStart !== -1 && !this.skipping && i - this.treeStart > this.maxTreeLength) {
+      this.report('tree-too-large', this.treeStart, `tree longer than ${this.maxTreeLength} characters; skipped`);
+      this.skipping = true;
+    }
+  }
+
+  private openTree(index: number): void {
+    this.depth = 1;
+    this.treeStart = index;
+    const offset = this.bufferOffset + index;
+    this.treeStartPoint = { offset, line: this.line, column: offset - this.lineStart + 1 };
+    this.treeLineStart = this.lineStart;
+    this.openOffsets = [offset];
+  }
+
+  private closeTree(index: number): void {
+    if (this.skipping) {
+      this.skipping = false;
+    } else {
+      const text = this.buffer.slice(this.treeStart, index + 1);
+      // Start the line index at the line's beginning when it is still buffered, for whole-line excerpts.
+      const lineFrom = Math.max(this.treeLineStart - this.bufferOffset, 0);
+      const prefix = this.buffer.slice(lineFrom, this.treeStart);
+      const start = this.treeStartPoint;
+      const lines = new LineIndex(prefix + text, {
+        offset: start.offset - prefix.length,
+        line: start.line,
+        column: start.column - prefix.length,
+      });
+      this.onTree({ text, offset: start.offset, lines });
+    }
+    this.treeStart = -1;
+    this.openOffsets = [];
+  }
+
+  private reportUnclosed(where: string): void {
+    const innermost = this.openOffsets[this.openOffsets.length - 1] ?? this.treeStartPoint.offset;
+    const open = this.openOffsets.length;
+    const index = innermost - this.bufferOffset;
+    const first = this.treeStartPoint;
+    this.report(
+      'unclosed-bracket',
+      index,
+      `bracket never closed: ${open} bracket${open === 1 ? '' : 's'} still open ${where}`,
+      [`the tree begins at ${first.line}:${first.column}; it is skipped`],
+    );
+  }
+
+  private report(code: DiagnosticCode, index: number, message: string, notes?: string[]): void {
+    const offset = this.bufferOffset + index;
+    const newlineBefore = this.buffer.lastIndexOf('\n', index - 1);
+    const from = newlineBefore + 1;
+    let to = this.buffer.indexOf('\n', index);
+    if (to === -1) to = this.buffer.length;
+    // The scan position's line, less the line feeds between the problem and it.
+    let line = this.line;
+    for (let k = index; k < this.scan; k++) if (this.buffer.charCodeAt(k) === NEWLINE) line--;
+    const column = newlineBefore === -1 ? this.bufferStartColumn : 1;
+    const lines = new LineIndex(this.buffer.slice(from, to), { offset: this.bufferOffset + from, line, column });
+    this.onProblem(diagnose(code, message, { file: this.file, offset, lines }, notes));
+  }
+
+  private wordAt(index: number): string {
+    const match = /^[^\s()]{1,40}/.exec(this.buffer.slice(index, index + 40));
+    return match ? match[0] : this.buffer.charAt(index);
+  }
+
+  /** Drops consumed text, keeping the open tree and the current line (when it is short). */
+  private compact(): void {
+    let keep = this.scan;
+    if (this.treeStart !== -1 && !this.skipping) keep = Math.min(keep, this.treeStart);
+    const lineIndex = this.lineStart - this.bufferOffset;
+    if (lineIndex >= 0 && keep - lineIndex < 4096) keep = Math.min(keep, lineIndex);
+    if (keep === 0) return;
+    const lastNewline = this.buffer.lastIndexOf('\n', keep - 1);
+    this.bufferStartColumn = lastNewline === -1 ? this.bufferStartColumn + keep : keep - lastNewline;
+    this.buffer = this.buffer.slice(keep);
+    this.bufferOffset += keep;
+    this.scan -= keep;
+    if (this.treeStart !== -1) this.treeStart = this.skipping ? -1 : this.treeStart - keep;
+    if (this.skipping) this.treeStart = -1;
+  }
+}
