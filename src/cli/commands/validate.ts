@@ -25,22 +25,31 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   const output = Output.to(options.output as string | undefined, io);
   const json = options.json === true;
   const problems: Diagnostic[] = [];
-  const lines: string[] = [];
-  const validator = new BracketedValidator((diagnostic) => {
-    if (json) problems.push(diagnostic);
-    else lines.push(formatDiagnostic(diagnostic, { source: options.source === true }));
-  });
+  // The reader reports a stretch of input before its trees are checked, so a
+  // file's problems are held until the next file starts, then printed in file order.
+  let current: Diagnostic[] = [];
+  const finished: Diagnostic[][] = [];
+  const validator = new BracketedValidator((diagnostic) => current.push(diagnostic));
   const flush = async () => {
-    if (lines.length === 0) return;
-    await output.write(lines.join('\n') + '\n');
-    lines.length = 0;
+    for (const batch of finished.splice(0)) {
+      batch.sort((a, b) => a.offset - b.offset);
+      if (json) problems.push(...batch);
+      else if (batch.length > 0) {
+        await output.write(batch.map((d) => formatDiagnostic(d, { source: options.source === true })).join('\n') + '\n');
+      }
+    }
+  };
+  const startInput = () => {
+    finished.push(current);
+    current = [];
+    validator.startFile();
   };
   try {
-    const trees = readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, () => validator.startFile());
-    for await (const tree of trees) {
+    for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, startInput)) {
+      if (finished.length > 0) await flush();
       validator.check(tree);
-      if (lines.length >= 256) await flush();
     }
+    finished.push(current);
     await flush();
     const summary = { ...validator.summary, files: validator.summary.files + failures.length };
     if (json) {

@@ -24,8 +24,15 @@ export function buildTree(
   place: ChunkPlace,
   options: ResolvedReadOptions,
   report: Report,
+  fileState: FileState = { lemmaWarned: false },
 ): Tree | undefined {
-  return new TreeBuilder(place, options, report).build(raw);
+  return new TreeBuilder(place, options, report, fileState).build(raw);
+}
+
+/** What the builder remembers across the trees of one file. */
+export interface FileState {
+  /** A word without a lemma part has been reported; one report per file is enough to show the problem. */
+  lemmaWarned: boolean;
 }
 
 class TreeBuilder {
@@ -37,6 +44,7 @@ class TreeBuilder {
     private readonly place: ChunkPlace,
     private readonly options: ResolvedReadOptions,
     private readonly report: Report,
+    private readonly fileState: FileState,
   ) {
     this.metaLabels = new Set(options.metaLabels);
     this.isLiteralTag = literalTagTest(options.literalTags);
@@ -146,9 +154,14 @@ class TreeBuilder {
     if (this.options.splitLemmas) {
       const parts = splitLemma(token.text);
       if (parts) return { type: 'word', form: unescapeLeaf(parts.form), lemma: unescapeLeaf(parts.lemma), position };
-      this.report(
-        diagnose('missing-lemma', `word "${token.text}" has no "-lemma" part`, this.where(token.start)),
-      );
+      if (!this.fileState.lemmaWarned) {
+        this.fileState.lemmaWarned = true;
+        this.report(
+          diagnose('missing-lemma', `word "${token.text}" has no "-lemma" part`, this.where(token.start), [
+            'later words of this file without a lemma are not reported; read without lemma splitting if the file has none',
+          ]),
+        );
+      }
     }
     return { type: 'word', form: unescapeLeaf(token.text), position };
   }

@@ -66,6 +66,7 @@ export async function* decodeStream(
 class PieceReader {
   private readonly splitter: TreeSplitter;
   private ready: Tree[] = [];
+  private readonly fileState = { lemmaWarned: false };
 
   constructor(
     private readonly options: ResolvedReadOptions,
@@ -109,7 +110,7 @@ class PieceReader {
       this.report(diagnose('bad-bracketing', error.message, { ...place, offset: chunk.offset + error.location.start.offset }));
       return;
     }
-    const tree = buildTree(raw, place, this.options, this.report);
+    const tree = buildTree(raw, place, this.options, this.report, this.fileState);
     if (tree) this.ready.push(tree);
   }
 }
