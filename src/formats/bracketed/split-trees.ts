@@ -183,6 +183,9 @@ export class TreeSplitter {
   private closeTree(index: number): void {
     if (this.skipping) {
       this.skipping = false;
+    } else if (index + 1 - this.treeStart > this.maxTreeLength) {
+      this.scan = index;
+      this.report('tree-too-large', this.treeStart, `tree longer than ${this.maxTreeLength} characters; skipped`);
     } else {
       const text = this.buffer.slice(this.treeStart, index + 1);
       // Start the line index at the line's beginning when it is still buffered, for whole-line excerpts.

@@ -92,8 +92,10 @@ class Part {
     const flat = this.line();
     if (this.leaf !== undefined || indent + flat.length <= width) return flat;
     const pad = ' '.repeat(indent + 2);
-    const lines = this.children.map((child) => pad + child.indented(indent + 2, width));
-    return `(${this.label}\n${lines.join('\n')})`;
+    const lines = this.children.map((child) => child.indented(indent + 2, width));
+    // An unlabelled outer bracket has nothing to stand on its first line: its first child does.
+    if (this.label === '') return `( ${lines.map((line, i) => (i === 0 ? line : pad + line)).join('\n')})`;
+    return `(${this.label}\n${lines.map((line) => pad + line).join('\n')})`;
   }
 }
 
