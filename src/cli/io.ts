@@ -1,6 +1,6 @@
 import { createReadStream, createWriteStream, type WriteStream } from 'node:fs';
 import { rename, stat, unlink } from 'node:fs/promises';
-import { basename, dirname, join } from 'node:path';
+import { basename, dirname, join, resolve } from 'node:path';
 import type { Readable, Writable } from 'node:stream';
 
 /** The streams a CLI run talks through; tests pass their own. */
@@ -31,7 +31,7 @@ export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: 
       inputs.push({ name, bytes: () => io.stdin });
       continue;
     }
-    const path = io.cwd ? join(io.cwd, name) : name;
+    const path = io.cwd ? resolve(io.cwd, name) : name;
     try {
       const info = await stat(path);
       if (info.isDirectory()) {
@@ -45,6 +45,9 @@ export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: 
   }
   return { inputs, failures };
 }
+
+/** A file could not be written; its message is the one-line reason for the user. */
+export class OutputError extends Error {}
 
 /** A short reason for a file-system error. */
 export function describeError(error: unknown): string {
@@ -66,10 +69,11 @@ export class Output {
 
   private constructor(
     private readonly stream: Writable,
+    private readonly name?: string,
     private readonly target?: string,
     private readonly temporary?: string,
   ) {
-    if (stream !== undefined && temporary) {
+    if (temporary) {
       this.file = stream as WriteStream;
       this.file.on('error', (error) => (this.failure = error));
     }
@@ -77,23 +81,38 @@ export class Output {
 
   static to(path: string | undefined, io: CliIO): Output {
     if (path === undefined || path === '-') return new Output(io.stdout);
-    const target = io.cwd ? join(io.cwd, path) : path;
+    const target = io.cwd ? resolve(io.cwd, path) : path;
     const temporary = join(dirname(target), `.${basename(target)}.tmp-${process.pid}-${Date.now()}`);
-    return new Output(createWriteStream(temporary), target, temporary);
+    return new Output(createWriteStream(temporary), path, target, temporary);
   }
 
   /** Writes text, waiting when the stream asks for it. */
   async write(text: string): Promise<void> {
-    if (this.failure) throw this.failure;
-    if (!this.stream.write(text)) await new Promise<void>((resolve) => this.stream.once('drain', resolve));
+    this.check();
+    if (!this.stream.write(text)) {
+      await new Promise<void>((resolve) => {
+        this.stream.once('drain', resolve);
+        this.stream.once('error', () => resolve());
+      });
+    }
+    this.check();
   }
 
   /** Finishes the output: a file is moved into place. */
   async commit(): Promise<void> {
     if (!this.file || !this.target || !this.temporary) return;
-    await new Promise<void>((resolve, reject) => this.file!.end((error?: Error | null) => (error ? reject(error) : resolve())));
-    if (this.failure) throw this.failure;
-    await rename(this.temporary, this.target);
+    await new Promise<void>((resolve) => this.file!.end(() => resolve()));
+    this.check();
+    try {
+      await rename(this.temporary, this.target);
+    } catch (error) {
+      this.failure = error;
+      this.check();
+    }
+  }
+
+  private check(): void {
+    if (this.failure) throw new OutputError(`cannot write "${this.name}": ${describeError(this.failure)}`);
   }
 
   /** Abandons the output: a temporary file is removed, the target left as it was. */

@@ -2,7 +2,7 @@ import { Command, CommanderError } from 'commander';
 import { registerRewrite } from './commands/rewrite.js';
 import { registerValidate } from './commands/validate.js';
 import { ExitCode, type CommandResult } from './exit-codes.js';
-import { describeError, type CliIO } from './io.js';
+import { describeError, OutputError, type CliIO } from './io.js';
 import { version } from '../version.js';
 
 /**
@@ -41,7 +41,7 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
       const informational = ['commander.helpDisplayed', 'commander.version', 'commander.help'];
       return informational.includes(error.code) ? ExitCode.Ok : ExitCode.UsageOrIO;
     }
-    io.stderr.write(`treebridge: ${describeError(error)}\n`);
+    io.stderr.write(`treebridge: ${error instanceof OutputError ? error.message : describeError(error)}\n`);
     return ExitCode.UsageOrIO;
   }
   for (const message of result.messages ?? []) io.stderr.write(`treebridge: ${message}\n`);

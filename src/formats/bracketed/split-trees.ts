@@ -86,6 +86,11 @@ export class TreeSplitter {
     this.maxDepth = options.maxDepth ?? 2000;
   }
 
+  /** Characters held right now: one open tree and part of a line at most, whatever the input's size. */
+  get buffered(): number {
+    return this.buffer.length;
+  }
+
   /** Feeds the next piece of decoded text. */
   push(piece: string): void {
     if (this.first) {

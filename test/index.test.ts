@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import * as treebridge from '../src/index.js';
+
+// Pins the public export list: a change here is a change of the library's interface.
+describe('the public interface', () => {
+  it('exports exactly these values', () => {
+    expect(Object.keys(treebridge).sort()).toEqual([
+      'BracketedValidator',
+      'LineIndex',
+      'childrenOf',
+      'diagnosticCodes',
+      'formatDiagnostic',
+      'formatLabel',
+      'isMetaOnly',
+      'nodesOf',
+      'parseLabel',
+      'preterminalsOf',
+      'readBracketed',
+      'readBracketedFile',
+      'readBracketedText',
+      'runCli',
+      'writeNode',
+      'writeTree',
+    ]);
+  });
+});
