@@ -4,16 +4,20 @@
  * `NP-SBJ-1` is category NP, function tag SBJ, coindex 1; `IP-SUB=2` is
  * category IP, function tag SUB, gapping index 2. Labels that begin and end
  * with a hyphen (`-NONE-`, `-LRB-`) are categories as a whole.
+ *
+ * Labels are read-only: the reader hands the same object to every node that
+ * carries the same written label, as a corpus repeats a few hundred labels
+ * millions of times. Build a new label to change one.
  */
 export interface Label {
   /** The category: `NP`, `IP`, `-NONE-`. */
-  category: string;
+  readonly category: string;
   /** Function tags in written order: `['SBJ']`, `['LOC', 'PRD']`. */
-  functions: string[];
+  readonly functions: readonly string[];
   /** The coindex `n` of `-n`: this node is the antecedent of traces `*T*-n` and of gapped `=n` nodes. */
-  coindex?: number;
+  readonly coindex?: number;
   /** The gapping index `n` of `=n`: this node is gapped with the node whose coindex is n. */
-  gapIndex?: number;
+  readonly gapIndex?: number;
 }
 
 /** Only numbers written without leading zeros are indices, so that every label writes back as read. */
@@ -21,8 +25,21 @@ function isCanonicalNumber(text: string): boolean {
   return /^\d+$/.test(text) && String(Number(text)) === text;
 }
 
+const parsed = new Map<string, Label>();
+
 /** Splits a written label into its parts. `formatLabel(parseLabel(s)) === s` for every label. */
 export function parseLabel(written: string): Label {
+  let label = parsed.get(written);
+  if (label === undefined) {
+    label = Object.freeze(splitLabel(written));
+    // A bound on the cache keeps a file of unique labels from holding them all.
+    if (parsed.size >= 100_000) parsed.clear();
+    parsed.set(written, label);
+  }
+  return label;
+}
+
+function splitLabel(written: string): Label {
   if (written.length > 1 && written.startsWith('-') && written.endsWith('-')) {
     return { category: written, functions: [] };
   }
@@ -42,14 +59,12 @@ export function parseLabel(written: string): Label {
     coindex = Number(last);
     parts.pop();
   }
-  const label: Label = { category: parts[0]!, functions: parts.slice(1) };
-  if (coindex !== undefined) label.coindex = coindex;
+  const label: Label = coindex === undefined ? { category: parts[0]!, functions: parts.slice(1) } : { category: parts[0]!, functions: parts.slice(1), coindex };
   return withGap(label, gapIndex);
 }
 
 function withGap(label: Label, gapIndex: number | undefined): Label {
-  if (gapIndex !== undefined) label.gapIndex = gapIndex;
-  return label;
+  return gapIndex === undefined ? label : { ...label, gapIndex };
 }
 
 /** Writes a label back in the bracketing convention. */

@@ -7,8 +7,8 @@ import type { Point } from './position.js';
  * bounded by the largest tree rather than growing with the file.
  */
 export class LineIndex {
-  /** Offsets (file-absolute) of each line feed inside the stretch. */
-  private readonly newlines: number[] = [];
+  /** Offsets (file-absolute) of each line feed inside the stretch; found on first use, as most trees never need them. */
+  private found: number[] | undefined;
 
   /**
    * @param text the stretch of text
@@ -17,23 +17,29 @@ export class LineIndex {
   constructor(
     readonly text: string,
     readonly start: Point,
-  ) {
-    for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) {
-      this.newlines.push(start.offset + i);
+  ) {}
+
+  private get newlines(): number[] {
+    if (this.found === undefined) {
+      this.found = [];
+      const text = this.text;
+      for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) this.found.push(this.start.offset + i);
     }
+    return this.found;
   }
 
   /** The line and column of a file offset inside (or just past) this stretch. */
   pointAt(offset: number): Point {
+    const newlines = this.newlines;
     let low = 0;
-    let high = this.newlines.length;
+    let high = newlines.length;
     while (low < high) {
       const middle = (low + high) >> 1;
-      if (this.newlines[middle]! < offset) low = middle + 1;
+      if (newlines[middle]! < offset) low = middle + 1;
       else high = middle;
     }
     if (low === 0) return { offset, line: this.start.line, column: this.start.column + (offset - this.start.offset) };
-    return { offset, line: this.start.line + low, column: offset - this.newlines[low - 1]! };
+    return { offset, line: this.start.line + low, column: offset - newlines[low - 1]! };
   }
 
   /** The text of the line holding `offset`, as far as this stretch holds it, and where that text starts. */

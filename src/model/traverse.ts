@@ -24,7 +24,13 @@ export function* nodesOf(tree: Tree, enterMeta = false): Generator<ConstituentNo
 /** The words of the sentence, in order, as their preterminals. */
 export function preterminalsOf(tree: Tree): Preterminal[] {
   const found: Preterminal[] = [];
-  for (const node of nodesOf(tree)) if (node.type === 'preterminal') found.push(node);
+  const visit = (nodes: ConstituentNode[]) => {
+    for (const node of nodes) {
+      if (node.type === 'preterminal') found.push(node);
+      else if (node.type === 'phrase') visit(node.children);
+    }
+  };
+  visit(tree.children);
   return found;
 }
 

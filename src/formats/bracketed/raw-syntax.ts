@@ -1,29 +1,30 @@
 /**
- * What the bracketed grammar returns for one top-level bracket: brackets,
- * their optional label token and their child brackets and tokens, with offsets
- * relative to the start of the parsed text. build-tree turns it into the model.
+ * What the bracketed grammar returns for one top-level bracket. Words are
+ * token indices; brackets record the indices of their opening and closing
+ * tokens. The token table ({@link TreeTokens}) turns indices into text and
+ * offsets; build-tree turns the whole into the model.
  */
-
-/** A run of non-space, non-bracket characters: a label or a leaf. */
-export interface RawToken {
-  kind: 'token';
-  /** The token as written, escapes included. */
-  text: string;
-  /** Offset of its first character in the parsed text. */
-  start: number;
-  /** Offset just past it. */
-  end: number;
-}
 
 /** A bracket, from `(` to its matching `)`. */
 export interface RawBracket {
-  kind: 'bracket';
-  /** The first token after `(`, if the bracket starts with one. */
-  label: RawToken | null;
-  /** Brackets and tokens inside, after the label. */
-  children: Array<RawBracket | RawToken>;
-  /** Offset of `(`. */
-  start: number;
-  /** Offset just past `)`. */
-  end: number;
+  /** Token index of the label, when the bracket starts with a word. */
+  label: number | null;
+  /** Child brackets, and words as token indices, after the label. */
+  children: Array<RawBracket | number>;
+  /** Token index of `(`. */
+  open: number;
+  /** Token index of `)`. */
+  close: number;
+}
+
+/** The tokens of one tree: kinds as a string for the grammar, spans for the text. */
+export interface TreeTokens {
+  /** One character per token: `(`, `)` or `w` (a word). */
+  kinds: string;
+  /** Offset of each token's first character in the tree's text. */
+  starts: Int32Array;
+  /** Offset just past each token. */
+  ends: Int32Array;
+  /** Offset of the first U+FFFD in a word (bytes that were not valid UTF-8), or -1. */
+  replacement: number;
 }

@@ -2,9 +2,10 @@ import { createReadStream } from 'node:fs';
 import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
 import { parse, SyntaxError as GrammarError } from '../../generated/bracketed-parser.js';
 import type { Tree } from '../../model/constituency.js';
-import { buildTree } from './build-tree.js';
+import { BuildContext, buildTree } from './build-tree.js';
 import { resolveReadOptions, type BracketedReadOptions, type ResolvedReadOptions } from './read-options.js';
 import { TreeSplitter, type TreeChunk } from './split-trees.js';
+import { tokenizeTree } from './tokenize-tree.js';
 
 /**
  * Reads bracketed trees from text that arrives in pieces, one tree at a time:
@@ -66,12 +67,13 @@ export async function* decodeStream(
 class PieceReader {
   private readonly splitter: TreeSplitter;
   private ready: Tree[] = [];
-  private readonly fileState = { lemmaWarned: false };
+  private readonly context: BuildContext;
 
   constructor(
     private readonly options: ResolvedReadOptions,
     private readonly report: Report,
   ) {
+    this.context = new BuildContext(options, report);
     const splitOptions = { treeBreaks: options.treeBreaks, maxTreeLength: options.maxTreeLength, maxDepth: options.maxDepth };
     this.splitter = new TreeSplitter(options.file, (chunk) => this.read(chunk), report, splitOptions);
   }
@@ -92,25 +94,27 @@ class PieceReader {
 
   private read(chunk: TreeChunk): void {
     const place = { file: this.options.file, offset: chunk.offset, lines: chunk.lines };
-    const replacement = chunk.text.indexOf('\uFFFD');
-    if (replacement !== -1) {
+    const tokens = tokenizeTree(chunk.text);
+    if (tokens.replacement !== -1) {
       this.report(
         diagnose('invalid-encoding', 'bytes that are not valid UTF-8 (shown as U+FFFD); the tree is skipped', {
           ...place,
-          offset: chunk.offset + replacement,
+          offset: chunk.offset + tokens.replacement,
         }),
       );
       return;
     }
     let raw;
     try {
-      raw = parse(chunk.text);
+      raw = parse(tokens.kinds);
     } catch (error) {
+      // The splitter hands out balanced brackets only, so the grammar accepts every chunk; this guards against a change there.
       if (!(error instanceof GrammarError)) throw error;
-      this.report(diagnose('bad-bracketing', error.message, { ...place, offset: chunk.offset + error.location.start.offset }));
+      const token = Math.min(error.location.start.offset, tokens.starts.length - 1);
+      this.report(diagnose('bad-bracketing', 'brackets do not form a tree', { ...place, offset: chunk.offset + (tokens.starts[token] ?? 0) }));
       return;
     }
-    const tree = buildTree(raw, place, this.options, this.report, this.fileState);
+    const tree = buildTree(raw, { ...place, text: chunk.text, tokens }, this.context);
     if (tree) this.ready.push(tree);
   }
 }

@@ -1,0 +1,19 @@
+// Reads bracketed files with treebridge's streaming reader and prints what it
+// measured as JSON: trees, words, problems, seconds spent reading, peak memory.
+// Run in a process of its own so that its peak memory is its own.
+import { readBracketedFile } from '../src/formats/bracketed/read-bracketed.js';
+import { preterminalsOf } from '../src/model/traverse.js';
+
+const files = process.argv.slice(2);
+let trees = 0;
+let words = 0;
+let problems = 0;
+const started = process.hrtime.bigint();
+for (const file of files) {
+  for await (const tree of readBracketedFile(file, {}, () => problems++)) {
+    trees++;
+    words += preterminalsOf(tree).length;
+  }
+}
+const seconds = Number(process.hrtime.bigint() - started) / 1e9;
+process.stdout.write(JSON.stringify({ trees, words, problems, seconds, peakMB: process.resourceUsage().maxRSS / 1024 }) + '\n');

@@ -1,0 +1,60 @@
+// npm run bench: reading throughput and peak memory of treebridge's bracketed
+// reader beside NLTK's reader (Debian python3-nltk) on the same files, in one run.
+// Data: IcePaHC (CC BY 4.0) from ../shared/corpora, or TREEBRIDGE_CORPORA.
+import { execFileSync } from 'node:child_process';
+import { createReadStream, createWriteStream, existsSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { pipeline } from 'node:stream/promises';
+import { fileURLToPath } from 'node:url';
+
+interface Measure {
+  trees: number;
+  seconds: number;
+  peakMB: number;
+}
+
+const here = dirname(fileURLToPath(import.meta.url));
+const root = resolve(here, '../..');
+const corpora = process.env.TREEBRIDGE_CORPORA ?? resolve(root, '../shared/corpora');
+const python = process.env.TREEBRIDGE_PYTHON ?? '/usr/bin/python3';
+const folder = join(corpora, 'icepahc');
+if (!existsSync(folder)) throw new Error(`IcePaHC not found at ${folder} (set TREEBRIDGE_CORPORA)`);
+const files = readdirSync(folder).filter((name) => name.endsWith('.psd')).sort().map((name) => join(folder, name));
+const megabytes = files.reduce((sum, file) => sum + statSync(file).size, 0) / 1048576;
+
+const ours = (inputs: string[]): Measure =>
+  JSON.parse(execFileSync(process.execPath, [join(here, 'read-worker.js'), ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
+const nltk = (inputs: string[]): Measure =>
+  JSON.parse(execFileSync(python, [join(root, 'bench/nltk-read.py'), ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
+
+const row = (name: string, size: number, m: Measure) =>
+  `${name.padEnd(26)} ${m.trees.toString().padStart(8)} ${m.seconds.toFixed(2).padStart(8)} ${(size / m.seconds).toFixed(2).padStart(8)} ${Math.round(m.trees / m.seconds).toString().padStart(9)} ${m.peakMB.toFixed(0).padStart(8)}`;
+
+console.log(`IcePaHC: ${files.length} files, ${megabytes.toFixed(1)} MB\n`);
+console.log(`${'reader'.padEnd(26)} ${'trees'.padStart(8)} ${'seconds'.padStart(8)} ${'MB/s'.padStart(8)} ${'trees/s'.padStart(9)} ${'peak MB'.padStart(8)}`);
+const treebridge = ours(files);
+console.log(row('treebridge', megabytes, treebridge));
+const reference = nltk(files);
+console.log(row('NLTK (python3-nltk)', megabytes, reference));
+
+const dir = mkdtempSync(join(tmpdir(), 'treebridge-bench-'));
+try {
+  const big = join(dir, 'icepahc-x10.psd');
+  const out = createWriteStream(big);
+  for (let copy = 0; copy < 10; copy++) {
+    for (const file of files) await pipeline(createReadStream(file), out, { end: false });
+  }
+  await new Promise<void>((done) => out.end(done));
+  const bigMeasure = ours([big]);
+  console.log(row('treebridge, 10x in one file', megabytes * 10, bigMeasure));
+  console.log('');
+  console.log(`speed: treebridge reads ${(reference.seconds / treebridge.seconds).toFixed(1)}x as fast as NLTK (target: 3x)`);
+  console.log(`trees agree: ${treebridge.trees === reference.trees ? 'yes' : 'NO'} (${treebridge.trees} and ${reference.trees})`);
+  console.log(
+    `memory: peak ${treebridge.peakMB.toFixed(0)} MB on ${megabytes.toFixed(0)} MB, ${bigMeasure.peakMB.toFixed(0)} MB on ${(megabytes * 10).toFixed(0)} MB ` +
+      `(ratio ${(bigMeasure.peakMB / treebridge.peakMB).toFixed(2)} for 10x the input; target: under 200 MB)`,
+  );
+} finally {
+  rmSync(dir, { recursive: true, force: true });
+}
