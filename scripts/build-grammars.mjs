@@ -9,9 +9,9 @@ import peggy from 'peggy';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 
-/** Each grammar, with the module and type its start rule returns. */
+/** Each grammar, with the type its start rule returns (and the module declaring it), and the options its actions use. */
 const grammars = [
-  { name: 'bracketed', returns: { module: '../formats/bracketed/raw-syntax.js', type: 'RawBracket' } },
+  { name: 'bracketed', returns: { module: '../model/constituency.js', type: 'Tree | undefined', options: "{ assembler: import('../formats/bracketed/tree-assembly.js').TreeAssembler }" } },
 ];
 
 const header = (name) =>
@@ -35,11 +35,11 @@ for (const { name, returns } of grammars) {
   writeAtomically(
     join(root, 'src/generated', `${name}-parser.d.ts`),
     header(name) +
-      `import type { ${returns.type} } from '${returns.module}';\n\n` +
+      `import type { ${returns.type.split(' ')[0]} } from '${returns.module}';\n\n` +
       `export interface ParseOptions {\n  grammarSource?: unknown;\n  startRule?: string;\n}\n\n` +
       `export interface ParseLocation {\n  start: { offset: number; line: number; column: number };\n  end: { offset: number; line: number; column: number };\n}\n\n` +
       `/** Thrown by parse() when the input does not match the grammar. */\n` +
       `export class SyntaxError extends Error {\n  location: ParseLocation;\n  expected: unknown;\n  found: string | null;\n}\n\n` +
-      `export function parse(input: string, options?: ParseOptions): ${returns.type};\n`,
+      `export function parse(input: string, options: ParseOptions & ${returns.options}): ${returns.type};\n`,
   );
 }

@@ -5,7 +5,7 @@ import { parseLabel } from '../../model/label.js';
 import type { LineIndex } from '../../model/line-index.js';
 import type { Position } from '../../model/position.js';
 import { literalTagTest, readEmptyLeaf, splitLemma, unescapeLeaf } from './leaves.js';
-import type { RawBracket, TreeTokens } from './raw-syntax.js';
+import type { Assembled, IdentifierNode, TreeAssembler, TreeTokens } from './tree-assembly.js';
 import type { ResolvedReadOptions } from './read-options.js';
 
 /** One tree's text as the reader cut it: where it stands in its file, and its tokens. */
@@ -38,15 +38,12 @@ export class BuildContext {
 }
 
 /**
- * Turns one raw top-level bracket into a {@link Tree}. Every problem that keeps
- * the tree from being read is reported, not just the first; the tree is then
- * not returned. Problems that do not stop reading are left to the validator.
+ * Assembles the model of one tree from its brackets, innermost first, as the
+ * grammar's actions hand them over. Every problem that keeps the tree from
+ * being read is reported, not just the first; `top` then returns nothing.
+ * Problems that do not stop reading are left to the validator.
  */
-export function buildTree(raw: RawBracket, source: TreeSource, context: BuildContext): Tree | undefined {
-  return new TreeBuilder(source, context).build(raw);
-}
-
-class TreeBuilder {
+export class TreeBuilder implements TreeAssembler {
   private failed = false;
   private readonly starts: Int32Array;
   private readonly ends: Int32Array;
@@ -61,68 +58,71 @@ class TreeBuilder {
     this.base = source.offset;
   }
 
-  build(raw: RawBracket): Tree | undefined {
-    const tree: Tree = {
-      type: 'tree',
-      children: [],
-      position: this.span(raw),
-      file: this.source.file,
-      source: this.source.lines,
-    };
-    const options = this.context.options;
-    const label = raw.label === null ? '' : this.text(raw.label);
-    if (raw.label === null && raw.children.length === 0) {
-      this.fail('empty-brackets', this.starts[raw.open]!, 'empty brackets "()" where a tree should be');
+  top(label: number | null, children: Array<Assembled | number>, open: number, close: number): Tree | undefined {
+    const labelText = label === null ? '' : this.text(label);
+    if (!this.context.wrapperLabels.has(labelText)) {
+      const node = this.bracket(label, children, open, close);
+      if (node?.type === 'identifier') this.fail('misplaced-id', open, 'an identifier node where a sentence should be');
+      return this.failed || node === undefined || node.type === 'identifier' ? undefined : this.tree(open, close, [node]);
+    }
+    if (label === null && children.length === 0) {
+      this.fail('empty-brackets', open, 'empty brackets "()" where a tree should be');
       return undefined;
     }
-    if (this.context.wrapperLabels.has(label)) {
-      tree.wrapper = { label };
-      for (const child of raw.children) {
-        if (typeof child === 'number') {
-          this.fail('word-outside-preterminal', this.starts[child]!, `word "${this.text(child)}" directly under the outer bracket`);
-        } else if (child.label !== null && this.text(child.label) === options.idLabel) {
-          this.readId(child, tree);
-        } else {
-          const node = this.node(child);
-          if (node) tree.children.push(node);
-        }
+    const nodes: ConstituentNode[] = [];
+    let identifier: IdentifierNode | undefined;
+    for (const child of children) {
+      if (typeof child === 'number') {
+        this.fail('word-outside-preterminal', child, `word "${this.text(child)}" directly under the outer bracket`);
+      } else if (child?.type === 'identifier') {
+        if (identifier) this.fail('misplaced-id', child.open, `a second ${this.context.options.idLabel} node in one tree`);
+        identifier = child;
+      } else if (child) {
+        nodes.push(child);
       }
-      if (!this.failed && tree.children.length === 0) {
-        this.fail('empty-tree', this.starts[raw.open]!, tree.id ? `tree ${tree.id} holds no sentence` : 'outer bracket holds no sentence');
-      }
-    } else {
-      const node = this.node(raw);
-      if (node) tree.children.push(node);
     }
-    return this.failed ? undefined : tree;
+    if (!this.failed && nodes.length === 0) {
+      const id = identifier ? ` ${this.source.text.slice(identifier.start, identifier.end)}` : '';
+      this.fail('empty-tree', open, `tree${id} holds no sentence`);
+    }
+    if (this.failed) return undefined;
+    const tree = this.tree(open, close, nodes);
+    tree.wrapper = { label: labelText };
+    if (identifier) {
+      tree.id = unescapeLeaf(this.source.text.slice(identifier.start, identifier.end));
+      tree.idPosition = { start: this.base + identifier.start, end: this.base + identifier.end };
+    }
+    return tree;
   }
 
-  private readId(raw: RawBracket, tree: Tree): void {
-    const idLabel = this.context.options.idLabel;
-    const only = raw.children[0];
-    if (raw.children.length !== 1 || typeof only !== 'number') {
-      this.fail('misplaced-id', this.starts[raw.open]!, `the ${idLabel} node must hold exactly one leaf`);
-      return;
+  leaf(token: number): Assembled {
+    const tokens = this.source.tokens;
+    const text = this.source.text;
+    const tag = text.slice(tokens.tagStarts[token], tokens.tagEnds[token]);
+    const wordStart = tokens.wordStarts[token]!;
+    const wordEnd = tokens.wordEnds[token]!;
+    const word = text.slice(wordStart, wordEnd);
+    const position = this.span(token, token);
+    if (this.context.metaLabels.has(tag)) return { type: 'meta', label: tag, text: unescapeLeaf(word), children: [], position };
+    if (tag === this.context.options.idLabel) return { type: 'identifier', start: wordStart, end: wordEnd, open: token };
+    const empty = readEmptyLeaf(word, tag, this.context.isLiteralTag);
+    if (empty) {
+      const node: ConstituentNode = { type: 'empty', label: parseLabel(tag), text: word, kind: empty.kind, position };
+      if (empty.refIndex !== undefined) node.refIndex = empty.refIndex;
+      return node;
     }
-    if (tree.id !== undefined) {
-      this.fail('misplaced-id', this.starts[raw.open]!, `a second ${idLabel} node in one tree`);
-      return;
-    }
-    tree.id = unescapeLeaf(this.text(only));
-    tree.idPosition = this.tokenSpan(only);
+    return { type: 'preterminal', pos: tag, word: this.word(word, wordStart, wordEnd), position };
   }
 
-  private node(raw: RawBracket): ConstituentNode | undefined {
-    const children = raw.children;
-    if (raw.label === null) {
-      if (children.length === 0) this.fail('empty-brackets', this.starts[raw.open]!, 'empty brackets "()"');
-      else this.fail('empty-label', this.starts[raw.open]!, 'bracket without a label inside a tree');
-      for (const child of children) if (typeof child !== 'number') this.node(child);
+  bracket(label: number | null, children: Array<Assembled | number>, open: number, close: number): Assembled {
+    if (label === null) {
+      if (children.length === 0) this.fail('empty-brackets', open, 'empty brackets "()"');
+      else this.fail('empty-label', open, 'bracket without a label inside a tree');
       return undefined;
     }
-    const label = this.text(raw.label);
+    const labelText = this.text(label);
     if (children.length === 0) {
-      this.fail('childless-node', this.starts[raw.open]!, `"(${label})" has nothing inside`);
+      this.fail('childless-node', open, `"(${labelText})" has nothing inside`);
       return undefined;
     }
     let words = 0;
@@ -133,52 +133,67 @@ class TreeBuilder {
         words++;
       }
     }
-    if (this.context.metaLabels.has(label)) return this.meta(raw, label, words, firstWord);
+    if (this.context.metaLabels.has(labelText)) return this.meta(labelText, children, words, firstWord, open, close);
     if (words === children.length) {
+      if (labelText === this.context.options.idLabel && words === 1) {
+        return { type: 'identifier', start: this.starts[firstWord]!, end: this.ends[firstWord]!, open };
+      }
       if (words > 1) {
-        this.fail('several-words', this.starts[children[1] as number]!, `"${label}" holds ${words} words; a tag holds one`, [
+        this.fail('several-words', children[1] as number, `"${labelText}" holds ${words} words; a tag holds one`, [
           'brackets inside a word must be escaped as \\( and \\)',
         ]);
         return undefined;
       }
-      return this.leafNode(raw, label, firstWord);
+      return this.tagged(labelText, firstWord, open, close);
     }
     if (words > 0) {
-      this.fail('word-outside-preterminal', this.starts[firstWord]!, `word "${this.text(firstWord)}" stands beside brackets under "${label}"`, [
+      this.fail('word-outside-preterminal', firstWord, `word "${this.text(firstWord)}" stands beside brackets under "${labelText}"`, [
         'every word needs its own part-of-speech bracket, as in (N word)',
       ]);
     }
-    const built: ConstituentNode[] = [];
+    if (labelText === this.context.options.idLabel) {
+      this.fail('misplaced-id', open, `the ${labelText} node must hold exactly one leaf`);
+    }
+    if (this.failed) return undefined;
     const keepMeta = this.context.options.keepMeta;
+    const built: ConstituentNode[] = [];
     for (const child of children) {
-      if (typeof child === 'number') continue;
-      const node = this.node(child);
-      if (node && (keepMeta || node.type !== 'meta')) built.push(node);
+      const node = child as ConstituentNode | IdentifierNode;
+      if (node.type === 'identifier') {
+        this.fail('misplaced-id', node.open, `an ${this.context.options.idLabel} node inside a sentence`);
+        return undefined;
+      }
+      if (keepMeta || node.type !== 'meta') built.push(node);
     }
     if (built.length === 0) return undefined;
-    return { type: 'phrase', label: parseLabel(label), children: built, position: this.span(raw) };
+    return { type: 'phrase', label: parseLabel(labelText), children: built, position: this.span(open, close) };
   }
 
-  private leafNode(raw: RawBracket, tag: string, token: number): ConstituentNode {
+  private tree(open: number, close: number, children: ConstituentNode[]): Tree {
+    return { type: 'tree', children, position: this.span(open, close), file: this.source.file, source: this.source.lines };
+  }
+
+  private tagged(tag: string, token: number, open: number, close: number): ConstituentNode {
     const text = this.text(token);
     const empty = readEmptyLeaf(text, tag, this.context.isLiteralTag);
     if (empty) {
-      const node: ConstituentNode = { type: 'empty', label: parseLabel(tag), text, kind: empty.kind, position: this.span(raw) };
+      const node: ConstituentNode = { type: 'empty', label: parseLabel(tag), text, kind: empty.kind, position: this.span(open, close) };
       if (empty.refIndex !== undefined) node.refIndex = empty.refIndex;
       return node;
     }
-    return { type: 'preterminal', pos: tag, word: this.word(token, text), position: this.span(raw) };
+    return { type: 'preterminal', pos: tag, word: this.word(text, this.starts[token]!, this.ends[token]!), position: this.span(open, close) };
   }
 
-  private word(token: number, text: string): Word {
-    const position = this.tokenSpan(token);
+  /** A word from its text and its span in the tree's text. */
+  private word(text: string, start: number, end: number): Word {
+    const position = { start: this.base + start, end: this.base + end };
     if (this.context.options.splitLemmas) {
       const parts = splitLemma(text);
       if (parts) return { type: 'word', form: unescapeLeaf(parts.form), lemma: unescapeLeaf(parts.lemma), position };
       if (!this.context.lemmaWarned) {
         this.context.lemmaWarned = true;
         this.context.report(
-          diagnose('missing-lemma', `word "${text}" has no "-lemma" part`, this.where(this.starts[token]!), [
+          diagnose('missing-lemma', `word "${text}" has no "-lemma" part`, this.at(start), [
             'later words of this file without a lemma are not reported; read without lemma splitting if the file has none',
           ]),
         );
@@ -187,42 +202,57 @@ class TreeBuilder {
     return { type: 'word', form: unescapeLeaf(text), position };
   }
 
-  private meta(raw: RawBracket, label: string, words: number, firstWord: number): ConstituentNode | undefined {
-    const position = this.span(raw);
-    if (words === raw.children.length) {
-      const text = raw.children.map((token) => unescapeLeaf(this.text(token as number))).join(' ');
+  private meta(
+    label: string,
+    children: Array<Assembled | number>,
+    words: number,
+    firstWord: number,
+    open: number,
+    close: number,
+  ): Assembled {
+    const position = this.span(open, close);
+    if (words === children.length) {
+      const text = children.map((token) => unescapeLeaf(this.text(token as number))).join(' ');
       return { type: 'meta', label, text, children: [], position };
     }
     if (words > 0) {
-      this.fail('word-outside-preterminal', this.starts[firstWord]!, `word "${this.text(firstWord)}" stands beside brackets under "${label}"`);
-      return undefined;
+      this.fail('word-outside-preterminal', firstWord, `word "${this.text(firstWord)}" stands beside brackets under "${label}"`);
     }
-    const children: ConstituentNode[] = [];
-    for (const child of raw.children) {
-      const node = this.node(child as RawBracket);
-      if (node) children.push(node);
+    if (this.failed) return undefined;
+    const nodes: ConstituentNode[] = [];
+    for (const child of children) {
+      const node = child as ConstituentNode | IdentifierNode;
+      if (node.type === 'identifier') {
+        this.fail('misplaced-id', node.open, `an ${this.context.options.idLabel} node inside ${label}`);
+        return undefined;
+      }
+      nodes.push(node);
     }
-    return { type: 'meta', label, children, position };
+    return { type: 'meta', label, children: nodes, position };
   }
 
   private text(token: number): string {
     return this.source.text.slice(this.starts[token], this.ends[token]);
   }
 
-  private span(raw: RawBracket): Position {
-    return { start: this.base + this.starts[raw.open]!, end: this.base + this.ends[raw.close]! };
+  private span(open: number, close: number): Position {
+    return { start: this.base + this.starts[open]!, end: this.base + this.ends[close]! };
   }
 
   private tokenSpan(token: number): Position {
     return { start: this.base + this.starts[token]!, end: this.base + this.ends[token]! };
   }
 
-  private where(relative: number) {
+  private where(token: number) {
+    return this.at(this.starts[token]!);
+  }
+
+  private at(relative: number) {
     return { file: this.source.file, offset: this.base + relative, lines: this.source.lines };
   }
 
-  private fail(code: DiagnosticCode, relative: number, message: string, notes?: string[]): void {
+  private fail(code: DiagnosticCode, token: number, message: string, notes?: string[]): void {
     this.failed = true;
-    this.context.report(diagnose(code, message, this.where(relative), notes));
+    this.context.report(diagnose(code, message, this.where(token), notes));
   }
 }

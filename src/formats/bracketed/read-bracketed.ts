@@ -2,7 +2,7 @@ import { createReadStream } from 'node:fs';
 import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
 import { parse, SyntaxError as GrammarError } from '../../generated/bracketed-parser.js';
 import type { Tree } from '../../model/constituency.js';
-import { BuildContext, buildTree } from './build-tree.js';
+import { BuildContext, TreeBuilder } from './build-tree.js';
 import { resolveReadOptions, type BracketedReadOptions, type ResolvedReadOptions } from './read-options.js';
 import { TreeSplitter, type TreeChunk } from './split-trees.js';
 import { tokenizeTree } from './tokenize-tree.js';
@@ -104,9 +104,10 @@ class PieceReader {
       );
       return;
     }
-    let raw;
+    const assembler = new TreeBuilder({ ...place, text: chunk.text, tokens }, this.context);
+    let tree;
     try {
-      raw = parse(tokens.kinds);
+      tree = parse(tokens.kinds, { assembler });
     } catch (error) {
       // The splitter hands out balanced brackets only, so the grammar accepts every chunk; this guards against a change there.
       if (!(error instanceof GrammarError)) throw error;
@@ -114,7 +115,6 @@ class PieceReader {
       this.report(diagnose('bad-bracketing', 'brackets do not form a tree', { ...place, offset: chunk.offset + (tokens.starts[token] ?? 0) }));
       return;
     }
-    const tree = buildTree(raw, { ...place, text: chunk.text, tokens }, this.context);
     if (tree) this.ready.push(tree);
   }
 }
