@@ -5,7 +5,6 @@ import type { Tree } from '../../model/constituency.js';
 import { BuildContext, TreeBuilder } from './build-tree.js';
 import { resolveReadOptions, type BracketedReadOptions, type ResolvedReadOptions } from './read-options.js';
 import { TreeSplitter, type TreeChunk } from './split-trees.js';
-import { tokenizeTree } from './tokenize-tree.js';
 
 /**
  * Reads bracketed trees from text that arrives in pieces, one tree at a time:
@@ -94,7 +93,7 @@ class PieceReader {
 
   private read(chunk: TreeChunk): void {
     const place = { file: this.options.file, offset: chunk.offset, lines: chunk.lines };
-    const tokens = tokenizeTree(chunk.text);
+    const tokens = chunk.tokens;
     if (tokens.replacement !== -1) {
       this.report(
         diagnose('invalid-encoding', 'bytes that are not valid UTF-8 (shown as U+FFFD); the tree is skipped', {

@@ -2,6 +2,8 @@ import { diagnose, type Diagnostic } from '../../diagnostics/diagnostic.js';
 import type { DiagnosticCode } from '../../diagnostics/codes.js';
 import { LineIndex } from '../../model/line-index.js';
 import type { Point } from '../../model/position.js';
+import { CLOSE, OPEN, TokenTable } from './token-table.js';
+import type { TreeTokens } from './tree-assembly.js';
 
 /**
  * Where a new top-level tree may begin.
@@ -31,22 +33,25 @@ export interface TreeChunk {
   offset: number;
   /** Lines and columns for the chunk (and the start of its first line). */
   lines: LineIndex;
+  /** The chunk's tokens, offsets relative to the chunk; valid until the next chunk. */
+  tokens: TreeTokens;
 }
 
-const OPEN = 40; // (
-const CLOSE = 41; // )
 const BACKSLASH = 92;
 const NEWLINE = 10;
+/** U+FFFD, what the decoder puts where bytes are not valid UTF-8. */
+const REPLACEMENT = 0xfffd;
 
 function isSpace(code: number): boolean {
   return code === 32 || code === 9 || code === 10 || code === 13 || code === 12 || code === 11;
 }
 
 /**
- * Cuts a stream of text into top-level trees. Text arrives in pieces of any
- * size (`push`), trees leave through `onTree` as soon as they close, and what
- * cannot be a tree leaves through `onProblem`; nothing is thrown and nothing is
- * dropped without a diagnostic. Memory holds one tree and one line at most.
+ * Cuts a stream of text into top-level trees, and each tree into tokens, in
+ * one scan. Text arrives in pieces of any size (`push`), trees leave through
+ * `onTree` as soon as they close, and what cannot be a tree leaves through
+ * `onProblem`; nothing is thrown and nothing is dropped without a diagnostic.
+ * Memory holds one tree and one line at most.
  */
 export class TreeSplitter {
   private buffer = '';
@@ -70,6 +75,9 @@ export class TreeSplitter {
   private stray: 'text' | 'close' | null = null;
   /** Set while skipping a tree already reported as too large. */
   private skipping = false;
+  /** Where the word being scanned starts, relative to the tree; -1 between words. */
+  private wordStart = -1;
+  private readonly tokens = new TokenTable();
   private first = true;
   private readonly treeBreaks: TreeBreaks;
   private readonly maxTreeLength: number;
@@ -115,10 +123,12 @@ export class TreeSplitter {
 
   private run(final: boolean): void {
     const buffer = this.buffer;
+    const tokens = this.tokens;
     let i = this.scan;
     for (; i < buffer.length; i++) {
       const code = buffer.charCodeAt(i);
       if (code === NEWLINE) {
+        if (this.wordStart !== -1) this.endWord(i);
         this.line++;
         this.lineStart = this.bufferOffset + i + 1;
         continue;
@@ -142,13 +152,12 @@ export class TreeSplitter {
         }
         continue;
       }
-      if (code === BACKSLASH) {
-        if (i + 1 >= buffer.length && !final) break; // the escaped character has not arrived yet
-        const next = buffer.charCodeAt(i + 1);
-        if (next === OPEN || next === CLOSE || next === BACKSLASH) i++;
+      if (isSpace(code)) {
+        if (this.wordStart !== -1) this.endWord(i);
         continue;
       }
       if (code === OPEN) {
+        if (this.wordStart !== -1) this.endWord(i);
         if (this.treeBreaks === 'first-column' && this.bufferOffset + i === this.lineStart) {
           this.scan = i;
           if (!this.skipping) this.reportUnclosed(`before the next tree at line ${this.line}`);
@@ -157,16 +166,34 @@ export class TreeSplitter {
           continue;
         }
         this.depth++;
-        if (!this.skipping) this.openOffsets.push(this.bufferOffset + i);
-        if (this.depth > this.maxDepth && !this.skipping) {
-          this.scan = i;
-          this.report('tree-too-large', this.treeStart, `tree nested deeper than ${this.maxDepth} brackets; skipped`);
-          this.skipping = true;
+        if (!this.skipping) {
+          this.openOffsets.push(this.bufferOffset + i);
+          tokens.open(i - this.treeStart);
+          if (this.depth > this.maxDepth) {
+            this.scan = i;
+            this.report('tree-too-large', this.treeStart, `tree nested deeper than ${this.maxDepth} brackets; skipped`);
+            this.skipping = true;
+          }
         }
-      } else if (code === CLOSE) {
+        continue;
+      }
+      if (code === CLOSE) {
+        if (this.wordStart !== -1) this.endWord(i);
+        if (!this.skipping) {
+          tokens.close(i - this.treeStart, this.depth);
+          this.openOffsets.pop();
+        }
         this.depth--;
-        if (!this.skipping) this.openOffsets.pop();
         if (this.depth === 0) this.closeTree(i);
+        continue;
+      }
+      if (this.wordStart === -1) this.wordStart = i - this.treeStart;
+      if (code === BACKSLASH) {
+        if (i + 1 >= buffer.length && !final) break; // the escaped character has not arrived yet
+        const next = buffer.charCodeAt(i + 1);
+        if (next === OPEN || next === CLOSE || next === BACKSLASH) i++;
+      } else if (code === REPLACEMENT && !this.skipping) {
+        tokens.noteReplacement(i - this.treeStart);
       }
     }
     this.scan = i;
@@ -176,6 +203,11 @@ export class TreeSplitter {
     }
   }
 
+  private endWord(index: number): void {
+    if (!this.skipping) this.tokens.word(this.wordStart, index - this.treeStart);
+    this.wordStart = -1;
+  }
+
   private openTree(index: number): void {
     this.depth = 1;
     this.treeStart = index;
@@ -183,6 +215,9 @@ export class TreeSplitter {
     this.treeStartPoint = { offset, line: this.line, column: offset - this.lineStart + 1 };
     this.treeLineStart = this.lineStart;
     this.openOffsets = [offset];
+    this.wordStart = -1;
+    this.tokens.reset();
+    this.tokens.open(0);
   }
 
   private closeTree(index: number): void {
@@ -202,7 +237,7 @@ export class TreeSplitter {
         line: start.line,
         column: start.column - prefix.length,
       });
-      this.onTree({ text, offset: start.offset, lines });
+      this.onTree({ text, offset: start.offset, lines, tokens: this.tokens.finish() });
     }
     this.treeStart = -1;
     this.openOffsets = [];

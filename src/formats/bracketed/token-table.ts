@@ -1,0 +1,110 @@
+import type { TreeTokens } from './tree-assembly.js';
+
+export const OPEN = 40; // (
+export const CLOSE = 41; // )
+const WORD = 119; // 'w'
+const LEAF = 112; // 'p': a whole `(tag word)` bracket
+
+/**
+ * The tokens of the tree being read (see grammars/bracketed.peggy), filled by
+ * the splitter as it scans: one scan of the text finds both where trees end
+ * and what they hold. A bracket of exactly two words below the top,
+ * `(tag word)`, the commonest bracket of all, becomes one leaf token, so the
+ * grammar handles it in one step. Arrays are reused from tree to tree.
+ */
+export class TokenTable {
+  private kinds = new Uint8Array(4096);
+  private starts = new Int32Array(4096);
+  private ends = new Int32Array(4096);
+  private tagStarts = new Int32Array(4096);
+  private tagEnds = new Int32Array(4096);
+  private wordStarts = new Int32Array(4096);
+  private wordEnds = new Int32Array(4096);
+  private count = 0;
+  private replacement = -1;
+
+  /** Starts a new tree. */
+  reset(): void {
+    this.count = 0;
+    this.replacement = -1;
+  }
+
+  open(start: number): void {
+    this.push(OPEN, start, start + 1);
+  }
+
+  word(start: number, end: number): void {
+    this.push(WORD, start, end);
+  }
+
+  /** A closing bracket at `start`, closing a bracket at nesting `depth` (1 for the top). */
+  close(start: number, depth: number): void {
+    const count = this.count;
+    const kinds = this.kinds;
+    if (depth > 1 && count >= 3 && kinds[count - 1] === WORD && kinds[count - 2] === WORD && kinds[count - 3] === OPEN) {
+      const leaf = count - 3;
+      kinds[leaf] = LEAF;
+      this.tagStarts[leaf] = this.starts[leaf + 1]!;
+      this.tagEnds[leaf] = this.ends[leaf + 1]!;
+      this.wordStarts[leaf] = this.starts[leaf + 2]!;
+      this.wordEnds[leaf] = this.ends[leaf + 2]!;
+      this.ends[leaf] = start + 1;
+      this.count = leaf + 1;
+      return;
+    }
+    this.push(CLOSE, start, start + 1);
+  }
+
+  /** Remembers the first U+FFFD of the tree: bytes that were not valid UTF-8. */
+  noteReplacement(at: number): void {
+    if (this.replacement === -1) this.replacement = at;
+  }
+
+  /** The tree's tokens, as views valid until the next tree starts. */
+  finish(): TreeTokens {
+    const count = this.count;
+    return {
+      kinds: this.kindString(),
+      starts: this.starts.subarray(0, count),
+      ends: this.ends.subarray(0, count),
+      tagStarts: this.tagStarts.subarray(0, count),
+      tagEnds: this.tagEnds.subarray(0, count),
+      wordStarts: this.wordStarts.subarray(0, count),
+      wordEnds: this.wordEnds.subarray(0, count),
+      replacement: this.replacement,
+    };
+  }
+
+  private push(kind: number, start: number, end: number): void {
+    if (this.count === this.kinds.length) this.grow();
+    this.kinds[this.count] = kind;
+    this.starts[this.count] = start;
+    this.ends[this.count] = end;
+    this.count++;
+  }
+
+  private grow(): void {
+    const size = this.kinds.length * 2;
+    const widen = <T extends Uint8Array | Int32Array>(from: T, to: T): T => {
+      to.set(from);
+      return to;
+    };
+    this.kinds = widen(this.kinds, new Uint8Array(size));
+    this.starts = widen(this.starts, new Int32Array(size));
+    this.ends = widen(this.ends, new Int32Array(size));
+    this.tagStarts = widen(this.tagStarts, new Int32Array(size));
+    this.tagEnds = widen(this.tagEnds, new Int32Array(size));
+    this.wordStarts = widen(this.wordStarts, new Int32Array(size));
+    this.wordEnds = widen(this.wordEnds, new Int32Array(size));
+  }
+
+  /** The kinds as a string, built in slices that stay under the engine's argument limit. */
+  private kindString(): string {
+    let result = '';
+    for (let from = 0; from < this.count; from += 8192) {
+      const slice = this.kinds.subarray(from, Math.min(this.count, from + 8192));
+      result += String.fromCharCode.apply(null, slice as unknown as number[]);
+    }
+    return result;
+  }
+}
