@@ -104,13 +104,11 @@ export class TreeBuilder implements TreeAssembler {
     const word = text.slice(wordStart, wordEnd);
     const position = this.span(token, token);
     if (this.context.metaLabels.has(tag)) return { type: 'meta', label: tag, text: unescapeLeaf(word), children: [], position };
+
     if (tag === this.context.options.idLabel) return { type: 'identifier', start: wordStart, end: wordEnd, open: token };
     const empty = readEmptyLeaf(word, tag, this.context.isLiteralTag);
-    if (empty) {
-      const node: ConstituentNode = { type: 'empty', label: parseLabel(tag), text: word, kind: empty.kind, position };
-      if (empty.refIndex !== undefined) node.refIndex = empty.refIndex;
-      return node;
-    }
+    // refIndex is always set, if only to undefined, so that every empty element has one shape.
+    if (empty) return { type: 'empty', label: parseLabel(tag), text: word, kind: empty.kind, refIndex: empty.refIndex, position };
     return { type: 'preterminal', pos: tag, word: this.word(word, wordStart, wordEnd), position };
   }
 
@@ -170,17 +168,23 @@ export class TreeBuilder implements TreeAssembler {
   }
 
   private tree(open: number, close: number, children: ConstituentNode[]): Tree {
-    return { type: 'tree', children, position: this.span(open, close), file: this.source.file, source: this.source.lines };
+    // Every field is set here, if only to undefined, so that all trees share one shape.
+    return {
+      type: 'tree',
+      wrapper: undefined,
+      children,
+      id: undefined,
+      idPosition: undefined,
+      position: this.span(open, close),
+      file: this.source.file,
+      source: this.source.lines,
+    };
   }
 
   private tagged(tag: string, token: number, open: number, close: number): ConstituentNode {
     const text = this.text(token);
     const empty = readEmptyLeaf(text, tag, this.context.isLiteralTag);
-    if (empty) {
-      const node: ConstituentNode = { type: 'empty', label: parseLabel(tag), text, kind: empty.kind, position: this.span(open, close) };
-      if (empty.refIndex !== undefined) node.refIndex = empty.refIndex;
-      return node;
-    }
+    if (empty) return { type: 'empty', label: parseLabel(tag), text, kind: empty.kind, refIndex: empty.refIndex, position: this.span(open, close) };
     return { type: 'preterminal', pos: tag, word: this.word(text, this.starts[token]!, this.ends[token]!), position: this.span(open, close) };
   }
 
@@ -199,7 +203,7 @@ export class TreeBuilder implements TreeAssembler {
         );
       }
     }
-    return { type: 'word', form: unescapeLeaf(text), position };
+    return { type: 'word', form: unescapeLeaf(text), lemma: undefined, position };
   }
 
   private meta(
@@ -228,7 +232,7 @@ export class TreeBuilder implements TreeAssembler {
       }
       nodes.push(node);
     }
-    return { type: 'meta', label, children: nodes, position };
+    return { type: 'meta', label, text: undefined, children: nodes, position };
   }
 
   private text(token: number): string {

@@ -103,14 +103,15 @@ class PieceReader {
       );
       return;
     }
-    const assembler = new TreeBuilder({ ...place, text: chunk.text, tokens }, this.context);
+    const source = { file: place.file, offset: place.offset, lines: place.lines, text: chunk.text, tokens };
+    const assembler = new TreeBuilder(source, this.context);
     let tree;
     try {
       tree = parse(tokens.kinds, { assembler });
     } catch (error) {
       // The splitter hands out balanced brackets only, so the grammar accepts every chunk; this guards against a change there.
       if (!(error instanceof GrammarError)) throw error;
-      const token = Math.min(error.location.start.offset, tokens.starts.length - 1);
+      const token = Math.min(error.location.start.offset, tokens.count - 1);
       this.report(diagnose('bad-bracketing', 'brackets do not form a tree', { ...place, offset: chunk.offset + (tokens.starts[token] ?? 0) }));
       return;
     }

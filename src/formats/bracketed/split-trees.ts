@@ -46,6 +46,16 @@ function isSpace(code: number): boolean {
   return code === 32 || code === 9 || code === 10 || code === 13 || code === 12 || code === 11;
 }
 
+/** Space or tab, the padding of indented layouts; line feeds are counted, so they stop the run. */
+function isBlank(code: number): boolean {
+  return code === 32 || code === 9;
+}
+
+/** A character that can only continue a word: not space, bracket, backslash or U+FFFD. */
+function isPlain(code: number): boolean {
+  return code > 41 ? code !== BACKSLASH && code !== REPLACEMENT : code > 32 && code !== OPEN && code !== CLOSE;
+}
+
 /**
  * Cuts a stream of text into top-level trees, and each tree into tokens, in
  * one scan. Text arrives in pieces of any size (`push`), trees leave through
@@ -154,6 +164,7 @@ export class TreeSplitter {
       }
       if (isSpace(code)) {
         if (this.wordStart !== -1) this.endWord(i);
+        while (i + 1 < buffer.length && isBlank(buffer.charCodeAt(i + 1))) i++;
         continue;
       }
       if (code === OPEN) {
@@ -188,6 +199,13 @@ export class TreeSplitter {
         continue;
       }
       if (this.wordStart === -1) this.wordStart = i - this.treeStart;
+      if (code !== BACKSLASH && code !== REPLACEMENT) {
+        // The rest of a word, in a tight loop: most characters of a file are here.
+        let next = i + 1;
+        while (next < buffer.length && isPlain(buffer.charCodeAt(next))) next++;
+        i = next - 1;
+        continue;
+      }
       if (code === BACKSLASH) {
         if (i + 1 >= buffer.length && !final) break; // the escaped character has not arrived yet
         const next = buffer.charCodeAt(i + 1);

@@ -60,17 +60,17 @@ export class TokenTable {
     if (this.replacement === -1) this.replacement = at;
   }
 
-  /** The tree's tokens, as views valid until the next tree starts. */
+  /** The tree's tokens; the arrays are this table's own, valid until the next tree starts. */
   finish(): TreeTokens {
-    const count = this.count;
     return {
       kinds: this.kindString(),
-      starts: this.starts.subarray(0, count),
-      ends: this.ends.subarray(0, count),
-      tagStarts: this.tagStarts.subarray(0, count),
-      tagEnds: this.tagEnds.subarray(0, count),
-      wordStarts: this.wordStarts.subarray(0, count),
-      wordEnds: this.wordEnds.subarray(0, count),
+      count: this.count,
+      starts: this.starts,
+      ends: this.ends,
+      tagStarts: this.tagStarts,
+      tagEnds: this.tagEnds,
+      wordStarts: this.wordStarts,
+      wordEnds: this.wordEnds,
       replacement: this.replacement,
     };
   }

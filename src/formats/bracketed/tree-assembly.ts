@@ -8,6 +8,8 @@ import type { ConstituentNode, Tree } from '../../model/constituency.js';
 export interface TreeTokens {
   /** One character per token: `(`, `)`, `w` (a word) or `p` (a whole `(tag word)` bracket). */
   kinds: string;
+  /** How many tokens there are; the arrays below may be longer. */
+  count: number;
   /** Offset of each token's first character in the tree's text. */
   starts: Int32Array;
   /** Offset just past each token. */
