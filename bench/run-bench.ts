@@ -29,7 +29,7 @@ const megabytes = files.reduce((sum, file) => sum + statSync(file).size, 0) / 10
 const ours = (inputs: string[]): Measure =>
   JSON.parse(execFileSync(process.execPath, [join(here, 'read-worker.js'), ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
 const nltk = (inputs: string[]): Measure =>
-  JSON.parse(execFileSync(python, [join(root, 'bench/nltk-read.py'), ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
+  JSON.parse(execFileSync(python, [join(root, 'test/support/nltk-trees.py'), 'time', ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
 
 function median(measures: Measure[]): Measure {
   const sorted = [...measures].sort((a, b) => a.seconds - b.seconds);

@@ -1,19 +1,11 @@
 // Outside check: NLTK's tree reader (Debian python3-nltk, a reference library
 // nobody here wrote) reads the same trees, leaves and labels, tree by tree.
 // Corpora: GUM (CC BY 4.0) and IcePaHC (CC BY 4.0) in ../shared/corpora.
-import { execFileSync } from 'node:child_process';
-import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Diagnostic } from '../../src/diagnostics/diagnostic.js';
 import { readBracketedFile } from '../../src/formats/bracketed/read-bracketed.js';
-import { corpusFiles, projectRoot, python } from '../support/corpora.js';
+import { corpusFiles, nltkOutlines } from '../support/corpora.js';
 import { outline } from '../support/tree-outline.js';
-
-function nltkOutlines(files: string[]): string[] {
-  const script = join(projectRoot, 'test/corpora/nltk-dump-trees.py');
-  const out = execFileSync(python, [script, ...files], { encoding: 'utf8', maxBuffer: 1 << 30 });
-  return out.split('\n').filter((line) => line.length > 0);
-}
 
 async function ourOutlines(files: string[], problems: Diagnostic[]): Promise<string[]> {
   const lines: string[] = [];

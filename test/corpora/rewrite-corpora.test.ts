@@ -1,7 +1,6 @@
 // Writing the shared corpora (GUM CC BY 4.0, IcePaHC CC BY 4.0) in both
 // layouts and reading them back gives the same trees; NLTK's tree reader
 // (Debian python3-nltk, reference library) reads what we wrote as it read the originals.
-import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -9,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import type { Diagnostic } from '../../src/diagnostics/diagnostic.js';
 import { readBracketedFile, readBracketedText } from '../../src/formats/bracketed/read-bracketed.js';
 import { writeTree } from '../../src/formats/bracketed/write-bracketed.js';
-import { corpusFiles, projectRoot, python } from '../support/corpora.js';
+import { corpusFiles, nltkOutlines } from '../support/corpora.js';
 import { outline } from '../support/tree-outline.js';
 
 describe.each([
@@ -36,8 +35,7 @@ describe.each([
       const again = readBracketedText(text, { splitLemmas: extension === '.psd' }, fail).map((tree) => JSON.stringify(outline(tree)));
       expect(again).toEqual(original.slice(original.length - again.length));
     }
-    const script = join(projectRoot, 'test/corpora/nltk-dump-trees.py');
-    const nltk = execFileSync(python, [script, ...written], { encoding: 'utf8', maxBuffer: 1 << 30 }).trimEnd().split('\n');
+    const nltk = nltkOutlines(written);
     expect(nltk.length).toBe(original.length);
     const firstDifference = nltk.findIndex((line, i) => line !== original[i]);
     expect(firstDifference).toBe(-1);

@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { existsSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -29,3 +30,10 @@ export function corpusFiles(folder: string, extension: string): string[] {
 
 /** The Python interpreter that has Debian's python3-nltk: TREEBRIDGE_PYTHON, else /usr/bin/python3. */
 export const python = process.env.TREEBRIDGE_PYTHON ?? '/usr/bin/python3';
+
+/** Trees of bracketed files as NLTK's reader sees them: one JSON outline line per tree (see nltk-trees.py). */
+export function nltkOutlines(files: string[]): string[] {
+  const script = join(projectRoot, 'test/support/nltk-trees.py');
+  const out = execFileSync(python, [script, 'dump', ...files], { encoding: 'utf8', maxBuffer: 1 << 30 });
+  return out.split('\n').filter((line) => line.length > 0);
+}
