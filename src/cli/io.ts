@@ -2,6 +2,7 @@ import { createReadStream, createWriteStream, type WriteStream } from 'node:fs';
 import { rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import type { Readable, Writable } from 'node:stream';
+import { PIECE_SIZE } from '../formats/bracketed/read-bracketed.js';
 
 /** The streams a CLI run talks through; tests pass their own. */
 export interface CliIO {
@@ -38,7 +39,7 @@ export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: 
         failures.push(`cannot read "${name}": it is a directory`);
         continue;
       }
-      inputs.push({ name, bytes: () => createReadStream(path), size: info.size });
+      inputs.push({ name, bytes: () => createReadStream(path, { highWaterMark: PIECE_SIZE }), size: info.size });
     } catch (error) {
       failures.push(`cannot read "${name}": ${describeError(error)}`);
     }
