@@ -11,7 +11,13 @@ export { diagnosticCodes } from './diagnostics/codes.js';
 export type { Diagnostic, Report, Severity } from './diagnostics/diagnostic.js';
 export { formatDiagnostic } from './diagnostics/format-diagnostic.js';
 export type { BracketedReadOptions } from './formats/bracketed/read-options.js';
-export { readBracketed, readBracketedFile, readBracketedText } from './formats/bracketed/read-bracketed.js';
+export {
+  readBracketed,
+  readBracketedBatches,
+  readBracketedFile,
+  readBracketedFileBatches,
+  readBracketedText,
+} from './formats/bracketed/read-bracketed.js';
 export type { TreeBreaks } from './formats/bracketed/split-trees.js';
 export type { Layout, WriteOptions } from './formats/bracketed/write-bracketed.js';
 export { writeNode, writeTree } from './formats/bracketed/write-bracketed.js';

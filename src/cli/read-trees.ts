@@ -1,5 +1,5 @@
 import type { Report } from '../diagnostics/diagnostic.js';
-import { decodeStream, readBracketed } from '../formats/bracketed/read-bracketed.js';
+import { decodeStream, readBracketedBatches } from '../formats/bracketed/read-bracketed.js';
 import type { BracketedReadOptions } from '../formats/bracketed/read-options.js';
 import type { Tree } from '../model/constituency.js';
 import type { CliIO, Input } from './io.js';
@@ -22,7 +22,7 @@ export async function* readTreesOf(
     for (const input of inputs) {
       onInput?.(input);
       const text = decodeStream(input.bytes(), (bytes) => progress.advance(bytes));
-      yield* readBracketed(text, { ...options, file: input.name }, report);
+      for await (const batch of readBracketedBatches(text, { ...options, file: input.name }, report)) yield* batch;
       progress.nextInput();
     }
   } finally {

@@ -154,17 +154,19 @@ export class TreeBuilder implements TreeAssembler {
     }
     if (this.failed) return undefined;
     const keepMeta = this.context.options.keepMeta;
-    const built: ConstituentNode[] = [];
+    let dropped = 0;
     for (const child of children) {
       const node = child as ConstituentNode | IdentifierNode;
       if (node.type === 'identifier') {
         this.fail('misplaced-id', node.open, `an ${this.context.options.idLabel} node inside a sentence`);
         return undefined;
       }
-      if (keepMeta || node.type !== 'meta') built.push(node);
+      if (!keepMeta && node.type === 'meta') dropped++;
     }
-    if (built.length === 0) return undefined;
-    return { type: 'phrase', label: parseLabel(labelText), children: built, position: this.span(open, close) };
+    // The grammar's own list becomes the children, unless meta brackets are to be left out.
+    const nodes = (dropped === 0 ? children : children.filter((child) => (child as ConstituentNode).type !== 'meta')) as ConstituentNode[];
+    if (nodes.length === 0) return undefined;
+    return { type: 'phrase', label: parseLabel(labelText), children: nodes, position: this.span(open, close) };
   }
 
   private tree(open: number, close: number, children: ConstituentNode[]): Tree {

@@ -23,13 +23,27 @@ export async function* readBracketed(
   options: BracketedReadOptions,
   report: Report,
 ): AsyncGenerator<Tree> {
+  for await (const batch of readBracketedBatches(pieces, options, report)) yield* batch;
+}
+
+/**
+ * As {@link readBracketed}, but hands out the trees of each piece together, in
+ * order: a consumer that loops over a batch without awaiting each tree reads faster.
+ */
+export async function* readBracketedBatches(
+  pieces: AsyncIterable<string> | Iterable<string>,
+  options: BracketedReadOptions,
+  report: Report,
+): AsyncGenerator<Tree[]> {
   const reader = new PieceReader(resolveReadOptions(options), report);
   for await (const piece of pieces) {
     reader.push(piece);
-    yield* reader.take();
+    const trees = reader.take();
+    if (trees.length > 0) yield trees;
   }
   reader.end();
-  yield* reader.take();
+  const trees = reader.take();
+  if (trees.length > 0) yield trees;
 }
 
 /** Reads every tree of a string at once, for tests and small inputs. */
@@ -48,6 +62,17 @@ export function readBracketedFile(
   onBytes?: (bytes: number) => void,
 ): AsyncGenerator<Tree> {
   return readBracketed(decodeStream(createReadStream(path, { highWaterMark: PIECE_SIZE }), onBytes), { ...options, file: options.file ?? path }, report);
+}
+
+/** Reads a file as a stream of batches of trees (see {@link readBracketedBatches}). */
+export function readBracketedFileBatches(
+  path: string,
+  options: BracketedReadOptions,
+  report: Report,
+  onBytes?: (bytes: number) => void,
+): AsyncGenerator<Tree[]> {
+  const pieces = decodeStream(createReadStream(path, { highWaterMark: PIECE_SIZE }), onBytes);
+  return readBracketedBatches(pieces, { ...options, file: options.file ?? path }, report);
 }
 
 /** Decodes a byte stream as UTF-8, piece by piece (characters split between pieces are joined). */
