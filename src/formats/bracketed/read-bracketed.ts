@@ -15,7 +15,7 @@ export const PIECE_SIZE = 64 * 1024;
  * at once, so the collector finds them dead; whole 1 MiB pieces read IcePaHC at
  * half the speed (npm run bench).
  */
-const SLICE = 16 * 1024;
+const SLICE = 4 * 1024;
 
 /**
  * Reads bracketed trees from text that arrives in pieces, one tree at a time:
