@@ -75,8 +75,6 @@ export class TreeSplitter {
   private line = 1;
   private lineStart = 0;
   private depth = 0;
-  /** Offsets of the brackets open in the current tree, innermost last. */
-  private openOffsets: number[] = [];
   /** Buffer index, point and line-start offset of the current tree's opening bracket; -1 outside trees. */
   private treeStart = -1;
   private treeStartPoint: Point = { offset: 0, line: 1, column: 1 };
@@ -136,6 +134,14 @@ export class TreeSplitter {
     const tokens = this.tokens;
     let i = this.scan;
     for (; i < buffer.length; i++) {
+      if (this.depth > 0 && !this.skipping) {
+        i = this.scanTree(i);
+        if (i >= buffer.length) break;
+        if (this.depth === 0) {
+          i--; // the tree closed: go on after it
+          continue;
+        }
+      }
       const code = buffer.charCodeAt(i);
       if (code === NEWLINE) {
         if (this.wordStart !== -1) this.endWord(i);
@@ -178,7 +184,6 @@ export class TreeSplitter {
         }
         this.depth++;
         if (!this.skipping) {
-          this.openOffsets.push(this.bufferOffset + i);
           tokens.open(i - this.treeStart);
           if (this.depth > this.maxDepth) {
             this.scan = i;
@@ -190,10 +195,7 @@ export class TreeSplitter {
       }
       if (code === CLOSE) {
         if (this.wordStart !== -1) this.endWord(i);
-        if (!this.skipping) {
-          tokens.close(i - this.treeStart, this.depth);
-          this.openOffsets.pop();
-        }
+        if (!this.skipping) tokens.close(i - this.treeStart, this.depth);
         this.depth--;
         if (this.depth === 0) this.closeTree(i);
         continue;
@@ -221,6 +223,91 @@ export class TreeSplitter {
     }
   }
 
+  /**
+   * The common case, inside a tree that is being kept, in a tight loop on
+   * local variables. Returns where it stopped: at the end of the buffer, just
+   * after the tree's closing bracket, or at a character it leaves to `run`
+   * (a bracket in the first column, a bracket too deep, a backslash at the end of the buffer).
+   */
+  private scanTree(start: number): number {
+    const buffer = this.buffer;
+    const length = buffer.length;
+    const tokens = this.tokens;
+    const base = this.treeStart;
+    const offset = this.bufferOffset;
+    const columnBreaks = this.treeBreaks === 'first-column';
+    const maxDepth = this.maxDepth;
+    let depth = this.depth;
+    let wordStart = this.wordStart;
+    let line = this.line;
+    let lineStart = this.lineStart;
+    let i = start;
+    for (; i < length; i++) {
+      const code = buffer.charCodeAt(i);
+      if (code <= CLOSE) {
+        if (code === 32 || code === 9 || code === 13 || code === 12 || code === 11) {
+          if (wordStart !== -1) {
+            tokens.word(wordStart, i - base);
+            wordStart = -1;
+          }
+          continue;
+        }
+        if (code === NEWLINE) {
+          if (wordStart !== -1) {
+            tokens.word(wordStart, i - base);
+            wordStart = -1;
+          }
+          line++;
+          lineStart = offset + i + 1;
+          continue;
+        }
+        if (code === OPEN) {
+          if (wordStart !== -1) {
+            tokens.word(wordStart, i - base);
+            wordStart = -1;
+          }
+          if ((columnBreaks && offset + i === lineStart) || depth >= maxDepth) break;
+          depth++;
+          tokens.open(i - base);
+          continue;
+        }
+        if (code === CLOSE) {
+          if (wordStart !== -1) {
+            tokens.word(wordStart, i - base);
+            wordStart = -1;
+          }
+          tokens.close(i - base, depth);
+          depth--;
+          if (depth === 0) {
+            this.depth = 0;
+            this.wordStart = -1;
+            this.line = line;
+            this.lineStart = lineStart;
+            this.closeTree(i);
+            return i + 1;
+          }
+          continue;
+        }
+        // Other characters up to ')' ('!' to apostrophe, control characters) are word characters.
+      }
+      if (wordStart === -1) wordStart = i - base;
+      if (code === BACKSLASH) {
+        if (i + 1 >= length) break;
+        const next = buffer.charCodeAt(i + 1);
+        if (next === OPEN || next === CLOSE || next === BACKSLASH) i++;
+      } else if (code === REPLACEMENT) {
+        tokens.noteReplacement(i - base);
+      } else {
+        while (i + 1 < length && isPlain(buffer.charCodeAt(i + 1))) i++;
+      }
+    }
+    this.depth = depth;
+    this.wordStart = wordStart;
+    this.line = line;
+    this.lineStart = lineStart;
+    return i;
+  }
+
   private endWord(index: number): void {
     if (!this.skipping) this.tokens.word(this.wordStart, index - this.treeStart);
     this.wordStart = -1;
@@ -232,7 +319,6 @@ export class TreeSplitter {
     const offset = this.bufferOffset + index;
     this.treeStartPoint = { offset, line: this.line, column: offset - this.lineStart + 1 };
     this.treeLineStart = this.lineStart;
-    this.openOffsets = [offset];
     this.wordStart = -1;
     this.tokens.reset();
     this.tokens.open(0);
@@ -258,20 +344,36 @@ export class TreeSplitter {
       this.onTree({ text, offset: start.offset, lines, tokens: this.tokens.finish() });
     }
     this.treeStart = -1;
-    this.openOffsets = [];
   }
 
   private reportUnclosed(where: string): void {
-    const innermost = this.openOffsets[this.openOffsets.length - 1] ?? this.treeStartPoint.offset;
-    const open = this.openOffsets.length;
-    const index = innermost - this.bufferOffset;
+    const open = this.openBrackets();
+    const innermost = open[open.length - 1] ?? this.treeStart;
     const first = this.treeStartPoint;
     this.report(
       'unclosed-bracket',
-      index,
-      `bracket never closed: ${open} bracket${open === 1 ? '' : 's'} still open ${where}`,
+      innermost,
+      `bracket never closed: ${open.length} bracket${open.length === 1 ? '' : 's'} still open ${where}`,
       [`the tree begins at ${first.line}:${first.column}; it is skipped`],
     );
+  }
+
+  /** Buffer indices of the brackets still open in the current tree, found again by scanning its text: only errors need them. */
+  private openBrackets(): number[] {
+    const open: number[] = [];
+    const buffer = this.buffer;
+    for (let k = this.treeStart; k < this.scan; k++) {
+      const code = buffer.charCodeAt(k);
+      if (code === BACKSLASH) {
+        const next = buffer.charCodeAt(k + 1);
+        if (next === OPEN || next === CLOSE || next === BACKSLASH) k++;
+      } else if (code === OPEN) {
+        open.push(k);
+      } else if (code === CLOSE) {
+        open.pop();
+      }
+    }
+    return open;
   }
 
   private report(code: DiagnosticCode, index: number, message: string, notes?: string[]): void {
