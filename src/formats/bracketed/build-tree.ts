@@ -21,7 +21,9 @@ export interface TreeSource {
 
 /** What the builder keeps across the trees of one file. */
 export class BuildContext {
-  readonly metaLabels: Set<string>;
+  private readonly metaLabels: Set<string>;
+  /** First characters of the meta labels, so that most tags are ruled out without hashing them. */
+  private readonly metaInitials = new Set<number>();
   readonly wrapperLabels: Set<string>;
   readonly isLiteralTag: (tag: string) => boolean;
   /** A word without a lemma part has been reported; one report per file is enough to show the problem. */
@@ -32,8 +34,14 @@ export class BuildContext {
     readonly report: Report,
   ) {
     this.metaLabels = new Set(options.metaLabels);
+    for (const label of options.metaLabels) this.metaInitials.add(label.charCodeAt(0));
     this.wrapperLabels = new Set(options.wrapperLabels);
     this.isLiteralTag = literalTagTest(options.literalTags);
+  }
+
+  /** True for the labels of brackets that hold notes and markup (`CODE`, `META`). */
+  isMetaLabel(label: string): boolean {
+    return this.metaInitials.has(label.charCodeAt(0)) && this.metaLabels.has(label);
   }
 }
 
@@ -103,7 +111,7 @@ export class TreeBuilder implements TreeAssembler {
     const wordEnd = tokens.wordEnds[token]!;
     const word = text.slice(wordStart, wordEnd);
     const position = this.span(token, token);
-    if (this.context.metaLabels.has(tag)) return { type: 'meta', label: tag, text: unescapeLeaf(word), children: [], position };
+    if (this.context.isMetaLabel(tag)) return { type: 'meta', label: tag, text: unescapeLeaf(word), children: [], position };
 
     if (tag === this.context.options.idLabel) return { type: 'identifier', start: wordStart, end: wordEnd, open: token };
     const empty = readEmptyLeaf(word, tag, this.context.isLiteralTag);
@@ -131,7 +139,7 @@ export class TreeBuilder implements TreeAssembler {
         words++;
       }
     }
-    if (this.context.metaLabels.has(labelText)) return this.meta(labelText, children, words, firstWord, open, close);
+    if (this.context.isMetaLabel(labelText)) return this.meta(labelText, children, words, firstWord, open, close);
     if (words === children.length) {
       if (labelText === this.context.options.idLabel && words === 1) {
         return { type: 'identifier', start: this.starts[firstWord]!, end: this.ends[firstWord]!, open };

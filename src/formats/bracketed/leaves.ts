@@ -8,6 +8,7 @@
 
 const STARRED = /^(\*[^*\s]*\*|\*)(?:-(\d+))?$/;
 const NONE = '-NONE-';
+const STAR = 42; // *
 
 /** The parts of an empty element's leaf, or undefined when the leaf is a word. */
 export function readEmptyLeaf(
@@ -15,6 +16,8 @@ export function readEmptyLeaf(
   tag: string,
   isLiteralTag: (tag: string) => boolean,
 ): { kind: string; refIndex?: number } | undefined {
+  // Almost every leaf is a word that neither starts with `*` nor is `0`: settle those before any lookup.
+  if (tag !== NONE && text.charCodeAt(0) !== STAR && text !== '0') return undefined;
   if (tag !== NONE && isLiteralTag(tag)) return undefined;
   const starred = STARRED.exec(text);
   if (starred) {
