@@ -5,7 +5,7 @@
 // fastest run counts for each (as Python's timeit advises): on a shared machine
 // slow runs measure the neighbours, and alternating exposes both readers to the same drift.
 import { execFileSync } from 'node:child_process';
-import { createReadStream, createWriteStream, existsSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
+import { createReadStream, createWriteStream, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { pipeline } from 'node:stream/promises';
@@ -27,8 +27,10 @@ if (!existsSync(folder)) throw new Error(`IcePaHC not found at ${folder} (set TR
 const files = readdirSync(folder).filter((name) => name.endsWith('.psd')).sort().map((name) => join(folder, name));
 const megabytes = files.reduce((sum, file) => sum + statSync(file).size, 0) / 1048576;
 
+/** The Node flags the treebridge command runs with, from its first line, so that the reader is measured as the command runs it. */
+const nodeFlags = readFileSync(join(here, '../src/bin/treebridge.js'), 'utf8').split('\n', 1)[0]!.split(/\s+/).filter((word) => word.startsWith('--'));
 const ours = (inputs: string[]): Measure =>
-  JSON.parse(execFileSync(process.execPath, [join(here, 'read-worker.js'), ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
+  JSON.parse(execFileSync(process.execPath, [...nodeFlags, join(here, 'read-worker.js'), ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
 const nltk = (inputs: string[]): Measure =>
   JSON.parse(execFileSync(python, [join(root, 'test/support/nltk-trees.py'), 'time', ...inputs], { encoding: 'utf8', maxBuffer: 1 << 24 }));
 
@@ -41,7 +43,8 @@ function fastest(measures: Measure[]): Measure {
 const row = (name: string, size: number, m: Measure) =>
   `${name.padEnd(30)} ${m.trees.toString().padStart(8)} ${m.seconds.toFixed(2).padStart(8)} ${(size / m.seconds).toFixed(1).padStart(7)} ${Math.round(m.trees / m.seconds).toString().padStart(9)} ${m.peakMB.toFixed(0).padStart(8)}`;
 
-console.log(`IcePaHC: ${files.length} files, ${megabytes.toFixed(1)} MB; fastest of ${rounds} alternating runs each\n`);
+console.log(`IcePaHC: ${files.length} files, ${megabytes.toFixed(1)} MB; fastest of ${rounds} alternating runs each`);
+console.log(`treebridge runs as the command does: node ${nodeFlags.join(' ')}\n`);
 console.log(`${'reader'.padEnd(30)} ${'trees'.padStart(8)} ${'seconds'.padStart(8)} ${'MB/s'.padStart(7)} ${'trees/s'.padStart(9)} ${'peak MB'.padStart(8)}`);
 const ourRuns: Measure[] = [];
 const theirRuns: Measure[] = [];

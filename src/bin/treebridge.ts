@@ -1,4 +1,4 @@
-#!/usr/bin/env node
+#!/usr/bin/env -S node --min-semi-space-size=16
 import { runCli } from '../cli/run-cli.js';
 
 // A reader that closes the pipe early (`| head`) is not an error: stop quietly.
