@@ -5,6 +5,7 @@ import { parseLabel } from '../../model/label.js';
 import type { LineIndex } from '../../model/line-index.js';
 import type { Position } from '../../model/position.js';
 import { literalTagTest, readEmptyLeaf, splitLemma, unescapeLeaf } from './leaves.js';
+import { LABELLED } from './token-table.js';
 import type { Assembled, IdentifierNode, TreeAssembler, TreeTokens } from './tree-assembly.js';
 import type { ResolvedReadOptions } from './read-options.js';
 
@@ -66,14 +67,14 @@ export class TreeBuilder implements TreeAssembler {
     this.base = source.offset;
   }
 
-  top(label: number | null, children: Array<Assembled | number>, open: number, close: number): Tree | undefined {
-    const labelText = label === null ? '' : this.text(label);
+  top(open: number, children: Array<Assembled | number>, close: number): Tree | undefined {
+    const labelText = this.labelOf(open) ?? '';
     if (!this.context.wrapperLabels.has(labelText)) {
-      const node = this.bracket(label, children, open, close);
+      const node = this.bracket(open, children, close);
       if (node?.type === 'identifier') this.fail('misplaced-id', open, 'an identifier node where a sentence should be');
       return this.failed || node === undefined || node.type === 'identifier' ? undefined : this.tree(open, close, [node]);
     }
-    if (label === null && children.length === 0) {
+    if (labelText === '' && children.length === 0) {
       this.fail('empty-brackets', open, 'empty brackets "()" where a tree should be');
       return undefined;
     }
@@ -120,13 +121,13 @@ export class TreeBuilder implements TreeAssembler {
     return { type: 'preterminal', pos: tag, word: this.word(word, wordStart, wordEnd), position };
   }
 
-  bracket(label: number | null, children: Array<Assembled | number>, open: number, close: number): Assembled {
-    if (label === null) {
+  bracket(open: number, children: Array<Assembled | number>, close: number): Assembled {
+    const labelText = this.labelOf(open);
+    if (labelText === undefined) {
       if (children.length === 0) this.fail('empty-brackets', open, 'empty brackets "()"');
       else this.fail('empty-label', open, 'bracket without a label inside a tree');
       return undefined;
     }
-    const labelText = this.text(label);
     if (children.length === 0) {
       this.fail('childless-node', open, `"(${labelText})" has nothing inside`);
       return undefined;
@@ -243,6 +244,13 @@ export class TreeBuilder implements TreeAssembler {
       nodes.push(node);
     }
     return { type: 'meta', label, text: undefined, children: nodes, position };
+  }
+
+  /** The label carried by an opening-bracket token, if it has one. */
+  private labelOf(open: number): string | undefined {
+    const tokens = this.source.tokens;
+    if (tokens.kinds.charCodeAt(open) !== LABELLED) return undefined;
+    return this.source.text.slice(tokens.tagStarts[open], tokens.tagEnds[open]);
   }
 
   private text(token: number): string {

@@ -4,13 +4,16 @@ export const OPEN = 40; // (
 export const CLOSE = 41; // )
 const WORD = 119; // 'w'
 const LEAF = 112; // 'p': a whole `(tag word)` bracket
+export const LABELLED = 111; // 'o': an opening bracket with its label
 
 /**
  * The tokens of the tree being read (see grammars/bracketed.peggy), filled by
  * the splitter as it scans: one scan of the text finds both where trees end
- * and what they hold. A bracket of exactly two words below the top,
- * `(tag word)`, the commonest bracket of all, becomes one leaf token, so the
- * grammar handles it in one step. Arrays are reused from tree to tree.
+ * and what they hold. An opening bracket and the word right after it, its
+ * label, become one token; a bracket of exactly two words below the top,
+ * `(tag word)`, the commonest bracket of all, becomes one leaf token. The
+ * grammar then takes each in one step. For both, `tagStarts`/`tagEnds` hold
+ * the label. Arrays are reused from tree to tree.
  */
 export class TokenTable {
   private kinds = new Uint8Array(4096);
@@ -34,6 +37,13 @@ export class TokenTable {
   }
 
   word(start: number, end: number): void {
+    const last = this.count - 1;
+    if (last >= 0 && this.kinds[last] === OPEN) {
+      this.kinds[last] = LABELLED;
+      this.tagStarts[last] = start;
+      this.tagEnds[last] = end;
+      return;
+    }
     this.push(WORD, start, end);
   }
 
@@ -41,13 +51,11 @@ export class TokenTable {
   close(start: number, depth: number): void {
     const count = this.count;
     const kinds = this.kinds;
-    if (depth > 1 && count >= 3 && kinds[count - 1] === WORD && kinds[count - 2] === WORD && kinds[count - 3] === OPEN) {
-      const leaf = count - 3;
+    if (depth > 1 && count >= 2 && kinds[count - 1] === WORD && kinds[count - 2] === LABELLED) {
+      const leaf = count - 2;
       kinds[leaf] = LEAF;
-      this.tagStarts[leaf] = this.starts[leaf + 1]!;
-      this.tagEnds[leaf] = this.ends[leaf + 1]!;
-      this.wordStarts[leaf] = this.starts[leaf + 2]!;
-      this.wordEnds[leaf] = this.ends[leaf + 2]!;
+      this.wordStarts[leaf] = this.starts[leaf + 1]!;
+      this.wordEnds[leaf] = this.ends[leaf + 1]!;
       this.ends[leaf] = start + 1;
       this.count = leaf + 1;
       return;

@@ -6,7 +6,7 @@ import type { ConstituentNode, Tree } from '../../model/constituency.js';
 
 /** The tokens of one tree: kinds as a string for the grammar, spans for the text. */
 export interface TreeTokens {
-  /** One character per token: `(`, `)`, `w` (a word) or `p` (a whole `(tag word)` bracket). */
+  /** One character per token: `(`, `o` (`(` with its label), `)`, `w` (a word) or `p` (a whole `(tag word)` bracket). */
   kinds: string;
   /** How many tokens there are; the arrays below may be longer. */
   count: number;
@@ -14,7 +14,7 @@ export interface TreeTokens {
   starts: Int32Array;
   /** Offset just past each token. */
   ends: Int32Array;
-  /** For a `p` token: where its tag starts and ends, and where its word starts and ends. */
+  /** For `o` and `p` tokens: where the label (tag) starts and ends; for `p`, where its word starts and ends. */
   tagStarts: Int32Array;
   tagEnds: Int32Array;
   wordStarts: Int32Array;
@@ -40,8 +40,8 @@ export type Assembled = ConstituentNode | IdentifierNode | undefined;
 export interface TreeAssembler {
   /** A `(tag word)` bracket inside the tree, given as its one token. */
   leaf(token: number): Assembled;
-  /** A bracket inside the tree. */
-  bracket(label: number | null, children: Array<Assembled | number>, open: number, close: number): Assembled;
+  /** A bracket inside the tree, from its opening token (which carries the label, if any) to its closing one. */
+  bracket(open: number, children: Array<Assembled | number>, close: number): Assembled;
   /** The top-level bracket: a wrapper, or the sentence's own top node. */
-  top(label: number | null, children: Array<Assembled | number>, open: number, close: number): Tree | undefined;
+  top(open: number, children: Array<Assembled | number>, close: number): Tree | undefined;
 }
