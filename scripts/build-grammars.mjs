@@ -11,7 +11,15 @@ const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 
 /** Each grammar, with the type its start rule returns (and the module declaring it), and the options its actions use. */
 const grammars = [
-  { name: 'bracketed', returns: { module: '../model/constituency.js', type: 'Tree | undefined', options: "{ assembler: import('../formats/bracketed/tree-assembly.js').TreeAssembler }" } },
+  {
+    name: 'bracketed',
+    returns: {
+      imports: 'Tree',
+      module: '../model/constituency.js',
+      type: 'Array<Tree | undefined>',
+      options: "{ assembler: import('../formats/bracketed/tree-assembly.js').TreeAssembler }",
+    },
+  },
 ];
 
 const header = (name) =>
@@ -35,7 +43,7 @@ for (const { name, returns } of grammars) {
   writeAtomically(
     join(root, 'src/generated', `${name}-parser.d.ts`),
     header(name) +
-      `import type { ${returns.type.split(' ')[0]} } from '${returns.module}';\n\n` +
+      `import type { ${returns.imports} } from '${returns.module}';\n\n` +
       `export interface ParseOptions {\n  grammarSource?: unknown;\n  startRule?: string;\n}\n\n` +
       `export interface ParseLocation {\n  start: { offset: number; line: number; column: number };\n  end: { offset: number; line: number; column: number };\n}\n\n` +
       `/** Thrown by parse() when the input does not match the grammar. */\n` +

@@ -6,19 +6,10 @@ import type { LineIndex } from '../../model/line-index.js';
 import type { Position } from '../../model/position.js';
 import { literalTagTest, readEmptyLeaf, splitLemma, unescapeLeaf } from './leaves.js';
 import { LABELLED } from './token-table.js';
+import type { TreeBatch } from './split-trees.js';
 import type { Assembled, IdentifierNode, TreeAssembler, TreeTokens } from './tree-assembly.js';
 import type { ResolvedReadOptions } from './read-options.js';
 
-/** One tree's text as the reader cut it: where it stands in its file, and its tokens. */
-export interface TreeSource {
-  file: string;
-  /** The tree's text, from its opening to its closing bracket. */
-  text: string;
-  /** File offset of the text's first character. */
-  offset: number;
-  lines: LineIndex;
-  tokens: TreeTokens;
-}
 
 /** What the builder keeps across the trees of one file. */
 export class BuildContext {
@@ -47,27 +38,51 @@ export class BuildContext {
 }
 
 /**
- * Assembles the model of one tree from its brackets, innermost first, as the
- * grammar's actions hand them over. Every problem that keeps the tree from
+ * Assembles the model of a batch of trees from their brackets, innermost
+ * first, as the grammar's actions hand them over; the trees come in the
+ * batch's order, each ending with `top`. Every problem that keeps a tree from
  * being read is reported, not just the first; `top` then returns nothing.
  * Problems that do not stop reading are left to the validator.
  */
 export class TreeBuilder implements TreeAssembler {
   private failed = false;
+  private readonly tokens: TreeTokens;
   private readonly starts: Int32Array;
   private readonly ends: Int32Array;
-  private readonly base: number;
+  /** Which tree of the batch is being assembled, and its text, file offset and lines. */
+  private current = 0;
+  private treeText = '';
+  private base = 0;
+  private lines: LineIndex | undefined;
 
   constructor(
-    private readonly source: TreeSource,
+    private readonly batch: TreeBatch,
+    private readonly file: string,
     private readonly context: BuildContext,
   ) {
-    this.starts = source.tokens.starts;
-    this.ends = source.tokens.ends;
-    this.base = source.offset;
+    this.tokens = batch.tokens;
+    this.starts = batch.tokens.starts;
+    this.ends = batch.tokens.ends;
+    this.enter(0);
+  }
+
+  private enter(index: number): void {
+    const chunk = this.batch.trees[index];
+    this.current = index;
+    this.failed = false;
+    if (!chunk) return;
+    this.treeText = chunk.text;
+    this.base = chunk.offset;
+    this.lines = chunk.lines;
   }
 
   top(open: number, children: Array<Assembled | number>, close: number): Tree | undefined {
+    const tree = this.topOf(open, children, close);
+    this.enter(this.current + 1);
+    return tree;
+  }
+
+  private topOf(open: number, children: Array<Assembled | number>, close: number): Tree | undefined {
     const labelText = this.labelOf(open) ?? '';
     if (!this.context.wrapperLabels.has(labelText)) {
       const node = this.bracket(open, children, close);
@@ -91,22 +106,22 @@ export class TreeBuilder implements TreeAssembler {
       }
     }
     if (!this.failed && nodes.length === 0) {
-      const id = identifier ? ` ${this.source.text.slice(identifier.start, identifier.end)}` : '';
+      const id = identifier ? ` ${this.treeText.slice(identifier.start, identifier.end)}` : '';
       this.fail('empty-tree', open, `tree${id} holds no sentence`);
     }
     if (this.failed) return undefined;
     const tree = this.tree(open, close, nodes);
     tree.wrapper = { label: labelText };
     if (identifier) {
-      tree.id = unescapeLeaf(this.source.text.slice(identifier.start, identifier.end));
+      tree.id = unescapeLeaf(this.treeText.slice(identifier.start, identifier.end));
       tree.idPosition = { start: this.base + identifier.start, end: this.base + identifier.end };
     }
     return tree;
   }
 
   leaf(token: number): Assembled {
-    const tokens = this.source.tokens;
-    const text = this.source.text;
+    const tokens = this.tokens;
+    const text = this.treeText;
     const tag = text.slice(tokens.tagStarts[token], tokens.tagEnds[token]);
     const wordStart = tokens.wordStarts[token]!;
     const wordEnd = tokens.wordEnds[token]!;
@@ -187,8 +202,8 @@ export class TreeBuilder implements TreeAssembler {
       id: undefined,
       idPosition: undefined,
       position: this.span(open, close),
-      file: this.source.file,
-      source: this.source.lines,
+      file: this.file,
+      source: this.lines,
     };
   }
 
@@ -248,13 +263,13 @@ export class TreeBuilder implements TreeAssembler {
 
   /** The label carried by an opening-bracket token, if it has one. */
   private labelOf(open: number): string | undefined {
-    const tokens = this.source.tokens;
+    const tokens = this.tokens;
     if (tokens.kinds.charCodeAt(open) !== LABELLED) return undefined;
-    return this.source.text.slice(tokens.tagStarts[open], tokens.tagEnds[open]);
+    return this.treeText.slice(tokens.tagStarts[open], tokens.tagEnds[open]);
   }
 
   private text(token: number): string {
-    return this.source.text.slice(this.starts[token], this.ends[token]);
+    return this.treeText.slice(this.starts[token], this.ends[token]);
   }
 
   private span(open: number, close: number): Position {
@@ -270,7 +285,7 @@ export class TreeBuilder implements TreeAssembler {
   }
 
   private at(relative: number) {
-    return { file: this.source.file, offset: this.base + relative, lines: this.source.lines };
+    return { file: this.file, offset: this.base + relative, lines: this.lines! };
   }
 
   private fail(code: DiagnosticCode, token: number, message: string, notes?: string[]): void {

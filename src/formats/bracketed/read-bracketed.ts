@@ -4,7 +4,7 @@ import { parse, SyntaxError as GrammarError } from '../../generated/bracketed-pa
 import type { Tree } from '../../model/constituency.js';
 import { BuildContext, TreeBuilder } from './build-tree.js';
 import { resolveReadOptions, type BracketedReadOptions, type ResolvedReadOptions } from './read-options.js';
-import { TreeSplitter, type TreeChunk } from './split-trees.js';
+import { TreeSplitter, type TreeBatch } from './split-trees.js';
 
 /** Bytes read from a file at a time: large reads spare round trips to the file system. */
 export const PIECE_SIZE = 64 * 1024;
@@ -112,7 +112,7 @@ class PieceReader {
   ) {
     this.context = new BuildContext(options, report);
     const splitOptions = { treeBreaks: options.treeBreaks, maxTreeLength: options.maxTreeLength, maxDepth: options.maxDepth };
-    this.splitter = new TreeSplitter(options.file, (chunk) => this.read(chunk), report, splitOptions);
+    this.splitter = new TreeSplitter(options.file, (batch) => this.read(batch), report, splitOptions);
   }
 
   push(piece: string): void {
@@ -129,30 +129,20 @@ class PieceReader {
     return trees;
   }
 
-  private read(chunk: TreeChunk): void {
-    const place = { file: this.options.file, offset: chunk.offset, lines: chunk.lines };
-    const tokens = chunk.tokens;
-    if (tokens.replacement !== -1) {
-      this.report(
-        diagnose('invalid-encoding', 'bytes that are not valid UTF-8 (shown as U+FFFD); the tree is skipped', {
-          ...place,
-          offset: chunk.offset + tokens.replacement,
-        }),
-      );
-      return;
-    }
-    const source = { file: place.file, offset: place.offset, lines: place.lines, text: chunk.text, tokens };
-    const assembler = new TreeBuilder(source, this.context);
-    let tree;
+  private read(batch: TreeBatch): void {
+    const assembler = new TreeBuilder(batch, this.options.file, this.context);
+    let trees;
     try {
-      tree = parse(tokens.kinds, { assembler });
+      trees = parse(batch.tokens.kinds, { assembler });
     } catch (error) {
-      // The splitter hands out balanced brackets only, so the grammar accepts every chunk; this guards against a change there.
+      // The splitter hands out balanced brackets only, so the grammar accepts every batch; this guards against a change there.
       if (!(error instanceof GrammarError)) throw error;
-      const token = Math.min(error.location.start.offset, tokens.count - 1);
-      this.report(diagnose('bad-bracketing', 'brackets do not form a tree', { ...place, offset: chunk.offset + (tokens.starts[token] ?? 0) }));
+      for (const chunk of batch.trees) {
+        const where = { file: this.options.file, offset: chunk.offset, lines: chunk.lines };
+        this.report(diagnose('bad-bracketing', 'brackets do not form a tree; the tree is skipped', where));
+      }
       return;
     }
-    if (tree) this.ready.push(tree);
+    for (const tree of trees) if (tree) this.ready.push(tree);
   }
 }

@@ -33,7 +33,13 @@ export interface TreeChunk {
   offset: number;
   /** Lines and columns for the chunk (and the start of its first line). */
   lines: LineIndex;
-  /** The chunk's tokens, offsets relative to the chunk; valid until the next chunk. */
+  /** Index of the chunk's first token in its batch's token table. */
+  firstToken: number;
+}
+
+/** The trees finished by one piece of input, and their tokens; valid until the next piece. */
+export interface TreeBatch {
+  trees: TreeChunk[];
   tokens: TreeTokens;
 }
 
@@ -58,10 +64,11 @@ function isPlain(code: number): boolean {
 
 /**
  * Cuts a stream of text into top-level trees, and each tree into tokens, in
- * one scan. Text arrives in pieces of any size (`push`), trees leave through
- * `onTree` as soon as they close, and what cannot be a tree leaves through
- * `onProblem`; nothing is thrown and nothing is dropped without a diagnostic.
- * Memory holds one tree and one line at most.
+ * one scan. Text arrives in pieces of any size (`push`); the trees a piece
+ * finishes leave together through `onTrees` at the end of the piece, and what
+ * cannot be a tree leaves through `onProblem`; nothing is thrown and nothing
+ * is dropped without a diagnostic. Memory holds the trees of one piece and
+ * one line at most.
  */
 export class TreeSplitter {
   private buffer = '';
@@ -86,6 +93,8 @@ export class TreeSplitter {
   /** Where the word being scanned starts, relative to the tree; -1 between words. */
   private wordStart = -1;
   private readonly tokens = new TokenTable();
+  /** Trees finished since the last batch left. */
+  private finished: TreeChunk[] = [];
   private first = true;
   private readonly treeBreaks: TreeBreaks;
   private readonly maxTreeLength: number;
@@ -93,7 +102,7 @@ export class TreeSplitter {
 
   constructor(
     private readonly file: string,
-    private readonly onTree: (chunk: TreeChunk) => void,
+    private readonly onTrees: (batch: TreeBatch) => void,
     private readonly onProblem: (diagnostic: Diagnostic) => void,
     options: SplitOptions = {},
   ) {
@@ -115,12 +124,23 @@ export class TreeSplitter {
     }
     this.buffer += piece;
     this.run(false);
+    this.handOver();
     this.compact();
+  }
+
+  /** Sends the finished trees on, as one batch. */
+  private handOver(): void {
+    if (this.finished.length === 0) return;
+    const trees = this.finished;
+    this.finished = [];
+    this.onTrees({ trees, tokens: this.tokens.finished() });
+    this.tokens.clearFinished();
   }
 
   /** Ends the input: an open tree is reported as unclosed. */
   end(): void {
     this.run(true);
+    this.handOver();
     if (this.treeStart !== -1 || this.skipping) {
       if (!this.skipping) this.reportUnclosed('at the end of the input');
       this.treeStart = -1;
@@ -189,6 +209,7 @@ export class TreeSplitter {
             this.scan = i;
             this.report('tree-too-large', this.treeStart, `tree nested deeper than ${this.maxDepth} brackets; skipped`);
             this.skipping = true;
+            tokens.dropTree();
           }
         }
         continue;
@@ -220,6 +241,7 @@ export class TreeSplitter {
     if (this.treeStart !== -1 && !this.skipping && i - this.treeStart > this.maxTreeLength) {
       this.report('tree-too-large', this.treeStart, `tree longer than ${this.maxTreeLength} characters; skipped`);
       this.skipping = true;
+      tokens.dropTree();
     }
   }
 
@@ -320,16 +342,23 @@ export class TreeSplitter {
     this.treeStartPoint = { offset, line: this.line, column: offset - this.lineStart + 1 };
     this.treeLineStart = this.lineStart;
     this.wordStart = -1;
-    this.tokens.reset();
+    this.tokens.beginTree();
     this.tokens.open(0);
   }
 
   private closeTree(index: number): void {
+    const tokens = this.tokens;
     if (this.skipping) {
       this.skipping = false;
     } else if (index + 1 - this.treeStart > this.maxTreeLength) {
       this.scan = index;
       this.report('tree-too-large', this.treeStart, `tree longer than ${this.maxTreeLength} characters; skipped`);
+      tokens.dropTree();
+    } else if (tokens.currentTreeReplacement !== -1) {
+      this.scan = index;
+      const at = this.treeStart + tokens.currentTreeReplacement;
+      this.report('invalid-encoding', at, 'bytes that are not valid UTF-8 (shown as U+FFFD); the tree is skipped');
+      tokens.dropTree();
     } else {
       const text = this.buffer.slice(this.treeStart, index + 1);
       // Start the line index at the line's beginning when it is still buffered, for whole-line excerpts.
@@ -341,7 +370,8 @@ export class TreeSplitter {
         line: start.line,
         column: start.column - prefix.length,
       });
-      this.onTree({ text, offset: start.offset, lines, tokens: this.tokens.finish() });
+      this.finished.push({ text, offset: start.offset, lines, firstToken: tokens.currentTreeStart });
+      tokens.commitTree();
     }
     this.treeStart = -1;
   }

@@ -7,9 +7,10 @@ const LEAF = 112; // 'p': a whole `(tag word)` bracket
 export const LABELLED = 111; // 'o': an opening bracket with its label
 
 /**
- * The tokens of the tree being read (see grammars/bracketed.peggy), filled by
+ * The tokens of the trees being read (see grammars/bracketed.peggy), filled by
  * the splitter as it scans: one scan of the text finds both where trees end
- * and what they hold. An opening bracket and the word right after it, its
+ * and what they hold. Finished trees gather until the reader takes them, all
+ * at once, so the grammar runs once per stretch of input rather than per tree. An opening bracket and the word right after it, its
  * label, become one token; a bracket of exactly two words below the top,
  * `(tag word)`, the commonest bracket of all, becomes one leaf token. The
  * grammar then takes each in one step. For both, `tagStarts`/`tagEnds` hold
@@ -24,12 +25,47 @@ export class TokenTable {
   private wordStarts = new Int32Array(4096);
   private wordEnds = new Int32Array(4096);
   private count = 0;
+  /** Index of the first token of the tree being scanned: the tokens before it belong to finished trees. */
+  private treeFirst = 0;
   private replacement = -1;
 
-  /** Starts a new tree. */
-  reset(): void {
-    this.count = 0;
+  /** Index of the first token of the tree being scanned. */
+  get currentTreeStart(): number {
+    return this.treeFirst;
+  }
+
+  /** Offset of the first U+FFFD in the tree being scanned, or -1. */
+  get currentTreeReplacement(): number {
+    return this.replacement;
+  }
+
+  /** Starts a new tree after the finished ones, dropping the tokens of a tree left unfinished. */
+  beginTree(): void {
+    this.count = this.treeFirst;
     this.replacement = -1;
+  }
+
+  /** Drops the tokens of the tree being scanned. */
+  dropTree(): void {
+    this.count = this.treeFirst;
+  }
+
+  /** Keeps the tokens of the tree just closed with the finished ones. */
+  commitTree(): void {
+    this.treeFirst = this.count;
+  }
+
+  /**
+   * Forgets the finished trees, keeping the tokens of the tree being scanned
+   * (moved to the front: their offsets are relative to their own tree).
+   */
+  clearFinished(): void {
+    const first = this.treeFirst;
+    if (first === 0) return;
+    const arrays = [this.kinds, this.starts, this.ends, this.tagStarts, this.tagEnds, this.wordStarts, this.wordEnds];
+    for (const array of arrays) array.copyWithin(0, first, this.count);
+    this.count -= first;
+    this.treeFirst = 0;
   }
 
   open(start: number): void {
@@ -63,23 +99,22 @@ export class TokenTable {
     this.push(CLOSE, start, start + 1);
   }
 
-  /** Remembers the first U+FFFD of the tree: bytes that were not valid UTF-8. */
+  /** Remembers the first U+FFFD of the tree being scanned: bytes that were not valid UTF-8. */
   noteReplacement(at: number): void {
     if (this.replacement === -1) this.replacement = at;
   }
 
-  /** The tree's tokens; the arrays are this table's own, valid until the next tree starts. */
-  finish(): TreeTokens {
+  /** The tokens of the finished trees; the arrays are this table's own, valid until {@link clearFinished}. */
+  finished(): TreeTokens {
     return {
-      kinds: this.kindString(),
-      count: this.count,
+      kinds: this.kindString(this.treeFirst),
+      count: this.treeFirst,
       starts: this.starts,
       ends: this.ends,
       tagStarts: this.tagStarts,
       tagEnds: this.tagEnds,
       wordStarts: this.wordStarts,
       wordEnds: this.wordEnds,
-      replacement: this.replacement,
     };
   }
 
@@ -106,11 +141,11 @@ export class TokenTable {
     this.wordEnds = widen(this.wordEnds, new Int32Array(size));
   }
 
-  /** The kinds as a string, built in slices that stay under the engine's argument limit. */
-  private kindString(): string {
+  /** The first `count` kinds as a string, built in slices that stay under the engine's argument limit. */
+  private kindString(count: number): string {
     let result = '';
-    for (let from = 0; from < this.count; from += 8192) {
-      const slice = this.kinds.subarray(from, Math.min(this.count, from + 8192));
+    for (let from = 0; from < count; from += 8192) {
+      const slice = this.kinds.subarray(from, Math.min(count, from + 8192));
       result += String.fromCharCode.apply(null, slice as unknown as number[]);
     }
     return result;

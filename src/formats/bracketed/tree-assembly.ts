@@ -4,7 +4,7 @@
  */
 import type { ConstituentNode, Tree } from '../../model/constituency.js';
 
-/** The tokens of one tree: kinds as a string for the grammar, spans for the text. */
+/** The tokens of a run of trees: kinds as a string for the grammar, spans (relative to each token's own tree) for the text. */
 export interface TreeTokens {
   /** One character per token: `(`, `o` (`(` with its label), `)`, `w` (a word) or `p` (a whole `(tag word)` bracket). */
   kinds: string;
@@ -19,8 +19,6 @@ export interface TreeTokens {
   tagEnds: Int32Array;
   wordStarts: Int32Array;
   wordEnds: Int32Array;
-  /** Offset of the first U+FFFD in a word (bytes that were not valid UTF-8), or -1. */
-  replacement: number;
 }
 
 /** An `(ID ...)` node on its way to the tree that holds it; it is not a node of the sentence. */
