@@ -1,7 +1,7 @@
 // Reads bracketed files with treebridge's streaming reader and prints what it
 // measured as JSON: trees, words, problems, seconds spent reading, peak memory.
 // Run in a process of its own so that its peak memory is its own.
-import { readBracketedFileBatches } from '../src/formats/bracketed/read-bracketed.js';
+import { readBracketedFilesBatches } from '../src/formats/bracketed/read-bracketed.js';
 import type { ConstituentNode } from '../src/model/constituency.js';
 
 /** Words under a node, counted without building a list (the reference side counts leaves the same way). */
@@ -19,12 +19,10 @@ let trees = 0;
 let words = 0;
 let problems = 0;
 const started = process.hrtime.bigint();
-for (const file of files) {
-  for await (const batch of readBracketedFileBatches(file, {}, () => problems++)) {
-    for (const tree of batch) {
-      trees++;
-      words += countWords(tree.children);
-    }
+for await (const batch of readBracketedFilesBatches(files, {}, () => problems++)) {
+  for (const tree of batch.trees) {
+    trees++;
+    words += countWords(tree.children);
   }
 }
 const seconds = Number(process.hrtime.bigint() - started) / 1e9;

@@ -1,8 +1,8 @@
-import { createReadStream, createWriteStream, type WriteStream } from 'node:fs';
+import { createWriteStream, type WriteStream } from 'node:fs';
 import { rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import type { Readable, Writable } from 'node:stream';
-import { PIECE_SIZE } from '../formats/bracketed/read-bracketed.js';
+import { openAhead } from '../formats/bracketed/read-bracketed.js';
 
 /** The streams a CLI run talks through; tests pass their own. */
 export interface CliIO {
@@ -17,8 +17,8 @@ export interface CliIO {
 export interface Input {
   /** The name as given (`-` for standard input). */
   name: string;
-  /** Bytes, read lazily. */
-  bytes: () => AsyncIterable<Buffer | string>;
+  /** Opens the input; a file starts being read at once, so it can be opened ahead of its turn. */
+  open: () => AsyncIterable<Buffer | string>;
   /** Size in bytes when known (files), for the progress bar. */
   size?: number;
 }
@@ -29,7 +29,7 @@ export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: 
   const failures: string[] = [];
   for (const name of names) {
     if (name === '-') {
-      inputs.push({ name, bytes: () => io.stdin });
+      inputs.push({ name, open: () => io.stdin });
       continue;
     }
     const path = io.cwd ? resolve(io.cwd, name) : name;
@@ -39,7 +39,7 @@ export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: 
         failures.push(`cannot read "${name}": it is a directory`);
         continue;
       }
-      inputs.push({ name, bytes: () => createReadStream(path, { highWaterMark: PIECE_SIZE }), size: info.size });
+      inputs.push({ name, open: () => openAhead(path), size: info.size });
     } catch (error) {
       failures.push(`cannot read "${name}": ${describeError(error)}`);
     }

@@ -1,4 +1,4 @@
-import { createReadStream } from 'node:fs';
+import { createReadStream, type ReadStream } from 'node:fs';
 import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
 import { parse, SyntaxError as GrammarError } from '../../generated/bracketed-parser.js';
 import type { Tree } from '../../model/constituency.js';
@@ -79,6 +79,32 @@ export function readBracketedFileBatches(
 ): AsyncGenerator<Tree[]> {
   const pieces = decodeStream(createReadStream(path, { highWaterMark: PIECE_SIZE }), onBytes);
   return readBracketedBatches(pieces, { ...options, file: options.file ?? path }, report);
+}
+
+/**
+ * Reads several files in turn as batches of trees, each batch with its file.
+ * The next file is opened and its first piece read while the current one is
+ * being parsed, so the reader never waits for the disk between files.
+ */
+export async function* readBracketedFilesBatches(
+  paths: string[],
+  options: BracketedReadOptions,
+  report: Report,
+): AsyncGenerator<{ file: string; trees: Tree[] }> {
+  let next = paths.length > 0 ? openAhead(paths[0]!) : undefined;
+  for (let k = 0; k < paths.length; k++) {
+    const current = next!;
+    next = k + 1 < paths.length ? openAhead(paths[k + 1]!) : undefined;
+    const file = paths[k]!;
+    for await (const trees of readBracketedBatches(decodeStream(current), { ...options, file }, report)) yield { file, trees };
+  }
+}
+
+/** Opens a file and starts reading its first piece at once. */
+export function openAhead(path: string): ReadStream {
+  const stream = createReadStream(path, { highWaterMark: PIECE_SIZE });
+  stream.read(0);
+  return stream;
 }
 
 /** Decodes a byte stream as UTF-8, piece by piece (characters split between pieces are joined). */
