@@ -17,7 +17,7 @@ export const LABELLED = 111; // 'o': an opening bracket with its label
  * the label. Arrays are reused from tree to tree.
  */
 export class TokenTable {
-  private kinds = new Uint8Array(4096);
+  private kinds: Buffer = Buffer.alloc(4096);
   private starts = new Int32Array(4096);
   private ends = new Int32Array(4096);
   private tagStarts = new Int32Array(4096);
@@ -132,7 +132,7 @@ export class TokenTable {
       to.set(from);
       return to;
     };
-    this.kinds = widen(this.kinds, new Uint8Array(size));
+    this.kinds = widen(this.kinds, Buffer.alloc(size));
     this.starts = widen(this.starts, new Int32Array(size));
     this.ends = widen(this.ends, new Int32Array(size));
     this.tagStarts = widen(this.tagStarts, new Int32Array(size));
@@ -141,13 +141,8 @@ export class TokenTable {
     this.wordEnds = widen(this.wordEnds, new Int32Array(size));
   }
 
-  /** The first `count` kinds as a string, built in slices that stay under the engine's argument limit. */
+  /** The first `count` kinds as a string: each kind is one Latin-1 character. */
   private kindString(count: number): string {
-    let result = '';
-    for (let from = 0; from < count; from += 8192) {
-      const slice = this.kinds.subarray(from, Math.min(count, from + 8192));
-      result += String.fromCharCode.apply(null, slice as unknown as number[]);
-    }
-    return result;
+    return this.kinds.toString('latin1', 0, count);
   }
 }
