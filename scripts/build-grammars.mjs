@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 // Compiles every grammar in grammars/ into an ES module in src/generated/,
 // with a declaration file whose return type names hand-written model types,
-// type, so callers of the generated parser are type-checked.
+// so callers of the generated parser are type-checked.
 import { mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';

@@ -16,7 +16,6 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
   const program = new Command('treebridge')
     .description('read, check and convert syntactically annotated corpora')
     .version(version, '-V, --version')
-    .showHelpAfterError('(run with --help for usage)')
     .exitOverride()
     .configureOutput({
       writeOut: (text) => io.stdout.write(text),
@@ -25,7 +24,7 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
   registerValidate(program, io, done);
   registerRewrite(program, io, done);
   for (const command of program.commands) {
-    command.exitOverride().showHelpAfterError('(run with --help for usage)').configureOutput({
+    command.exitOverride().configureOutput({
       writeOut: (text) => io.stdout.write(text),
       writeErr: (text) => io.stderr.write(text),
     });
