@@ -1,21 +1,24 @@
 import type { Report } from '../diagnostics/diagnostic.js';
 import { decodeStream, readBracketedBatches } from '../formats/bracketed/read-bracketed.js';
 import type { BracketedReadOptions } from '../formats/bracketed/read-options.js';
+import { readConllu } from '../formats/conllu/read-conllu.js';
 import type { Tree } from '../model/constituency.js';
+import type { DependencySentence } from '../model/dependency.js';
 import type { CliIO, Input } from './io.js';
 import { startProgress } from './progress.js';
 
 /**
- * Reads the trees of several inputs in turn, one at a time, drawing a progress
- * bar when the run is long. `onInput` hears each input as it starts.
+ * Reads several inputs in turn with a reader for their format, handing out
+ * what it reads one item at a time, and drawing a progress bar when the run
+ * is long. The next input opens while the current one is read, so no time is
+ * lost waiting for the disk between files. `onInput` hears each input as it starts.
  */
-export async function* readTreesOf(
+export async function* readInputs<T>(
   inputs: Input[],
-  options: BracketedReadOptions,
-  report: Report,
+  read: (pieces: AsyncIterable<string>, name: string) => AsyncIterable<T>,
   io: CliIO,
   onInput?: (input: Input) => void,
-): AsyncGenerator<Tree> {
+): AsyncGenerator<T> {
   const total = inputs.reduce((sum, input) => sum + (input.size ?? 0), 0);
   const progress = startProgress(io, total, 'reading');
   try {
@@ -23,14 +26,36 @@ export async function* readTreesOf(
     for (let k = 0; k < inputs.length; k++) {
       const input = inputs[k]!;
       const bytes = next!;
-      // The next input opens while this one is parsed, so no time is lost waiting for the disk between files.
       next = inputs[k + 1]?.open();
       onInput?.(input);
-      const text = decodeStream(bytes, (read) => progress.advance(read));
-      for await (const batch of readBracketedBatches(text, { ...options, file: input.name }, report)) yield* batch;
+      yield* read(decodeStream(bytes, (read) => progress.advance(read)), input.name);
       progress.nextInput();
     }
   } finally {
     progress.stop();
   }
+}
+
+/** The bracketed trees of several inputs. */
+export function readTreesOf(
+  inputs: Input[],
+  options: BracketedReadOptions,
+  report: Report,
+  io: CliIO,
+  onInput?: (input: Input) => void,
+): AsyncGenerator<Tree> {
+  const read = async function* (pieces: AsyncIterable<string>, name: string) {
+    for await (const batch of readBracketedBatches(pieces, { ...options, file: name }, report)) yield* batch;
+  };
+  return readInputs(inputs, read, io, onInput);
+}
+
+/** The CoNLL-U sentences of several inputs. */
+export function readSentencesOf(
+  inputs: Input[],
+  report: Report,
+  io: CliIO,
+  onInput?: (input: Input) => void,
+): AsyncGenerator<DependencySentence> {
+  return readInputs(inputs, (pieces, name) => readConllu(pieces, { file: name }, report), io, onInput);
 }

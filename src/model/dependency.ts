@@ -8,6 +8,7 @@
  * the same bytes; typed views (head as a number) are computed by the passes
  * that need them.
  */
+import type { LineIndex } from './line-index.js';
 import type { Position } from './position.js';
 
 /** The ten CoNLL-U columns, as written. */
@@ -77,4 +78,6 @@ export interface DependencySentence {
   position?: Position;
   /** The file the sentence was read from, as named by the caller. */
   file?: string;
+  /** Lines and columns of the sentence's source text, for diagnostics; filled by the reader. */
+  source?: LineIndex;
 }

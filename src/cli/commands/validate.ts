@@ -1,35 +1,53 @@
-import type { Command } from 'commander';
-import type { Diagnostic } from '../../diagnostics/diagnostic.js';
+import { readFileSync } from 'node:fs';
+import { Option, type Command } from 'commander';
+import type { Diagnostic, Report } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
-import { BracketedValidator } from '../../validate/validate-bracketed.js';
+import { BracketedValidator, type ValidationSummary } from '../../validate/validate-bracketed.js';
+import { ConlluValidator, type ConlluSummary } from '../../validate/validate-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
-import { openInputs, Output, type CliIO } from '../io.js';
-import { readTreesOf } from '../read-trees.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
+import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
+import { describeError, openInputs, Output, type CliIO } from '../io.js';
+import { readSentencesOf, readTreesOf } from '../read-trees.js';
 
 export function registerValidate(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
     .command('validate')
-    .description('check bracketed treebanks: one line per problem, then a summary')
+    .description('check bracketed treebanks or CoNLL-U files: one line per problem, then a summary')
     .argument('<files...>', 'input files, or - for standard input')
+    .addOption(new Option('--from <format>', 'input format (default: by extension, .conllu is CoNLL-U)').choices([...inputFormats]))
     .option('--json', 'print a JSON report instead of lines')
     .option('--source', 'show the source line with a caret, and notes, under each problem')
+    .option('--relations <labels>', 'CoNLL-U: the relation set, comma-separated or a file with one per line (default: the 37 universal relations)')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => {
     done(await validate(files, options, io));
   });
 }
 
+/** What one run of the validator over one format gives back. */
+interface Run {
+  summary: ConlluSummary | ValidationSummary;
+}
+
 async function validate(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   const { inputs, failures } = await openInputs(files, io);
+  const format = commonFormat(inputs, options.from as InputFormat | undefined);
+  if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  let relations: string[] | undefined;
+  if (typeof options.relations === 'string') {
+    const declared = readRelations(options.relations, io);
+    if (typeof declared === 'string') return { code: ExitCode.UsageOrIO, messages: [declared] };
+    relations = declared;
+  }
   const output = Output.to(options.output as string | undefined, io);
   const json = options.json === true;
   const problems: Diagnostic[] = [];
-  // The reader reports a stretch of input before its trees are checked, so a
+  // A reader reports a stretch of input before its trees are checked, so a
   // file's problems are held until the next file starts, then printed in file order.
   let current: Diagnostic[] = [];
   const finished: Diagnostic[][] = [];
-  const validator = new BracketedValidator((diagnostic) => current.push(diagnostic));
+  const collect: Report = (diagnostic) => current.push(diagnostic);
   const flush = async () => {
     for (const batch of finished.splice(0)) {
       batch.sort((a, b) => a.offset - b.offset);
@@ -39,19 +57,32 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
       }
     }
   };
-  const startInput = () => {
+  const nextInput = (startFile: () => void) => () => {
     finished.push(current);
     current = [];
-    validator.startFile();
+    startFile();
   };
+  let run: Run;
   try {
-    for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, startInput)) {
-      if (finished.length > 0) await flush();
-      validator.check(tree);
+    if (format === 'conllu') {
+      const validator = new ConlluValidator(collect, relations);
+      for await (const sentence of readSentencesOf(inputs, validator.report, io, nextInput(() => validator.startFile()))) {
+        if (finished.length > 0) await flush();
+        validator.check(sentence);
+      }
+      run = validator;
+    } else {
+      const validator = new BracketedValidator(collect);
+      const trees = readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, nextInput(() => validator.startFile()));
+      for await (const tree of trees) {
+        if (finished.length > 0) await flush();
+        validator.check(tree);
+      }
+      run = validator;
     }
     finished.push(current);
     await flush();
-    const summary = { ...validator.summary, files: validator.summary.files + failures.length };
+    const summary = { ...run.summary, files: run.summary.files + failures.length };
     if (json) {
       const report = {
         ...summary,
@@ -67,10 +98,22 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
     throw error;
   }
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  return { code: validator.summary.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: run.summary.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
 
-function summaryLine(s: { files: number; trees: number; words: number; errors: number; warnings: number }): string {
+/** A relation list given inline (`nsubj,obj`) or as a file with one relation per line. */
+function readRelations(value: string, io: CliIO): string[] | string {
+  if (value.includes(',') || /^[a-z]+(:[a-z]+)?$/.test(value)) return value.split(',').map((r) => r.trim()).filter(Boolean);
+  try {
+    const path = io.cwd ? `${io.cwd}/${value}` : value;
+    return readFileSync(path, 'utf8').split('\n').map((r) => r.trim()).filter((r) => r && !r.startsWith('#'));
+  } catch (error) {
+    return `cannot read "${value}": ${describeError(error)}`;
+  }
+}
+
+function summaryLine(summary: ConlluSummary | ValidationSummary): string {
   const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
-  return `${plural(s.files, 'file')}, ${plural(s.trees, 'tree')}, ${plural(s.words, 'word')}: ${plural(s.errors, 'error')}, ${plural(s.warnings, 'warning')}`;
+  const unit = 'sentences' in summary ? plural(summary.sentences, 'sentence') : plural(summary.trees, 'tree');
+  return `${plural(summary.files, 'file')}, ${unit}, ${plural(summary.words, 'word')}: ${plural(summary.errors, 'error')}, ${plural(summary.warnings, 'warning')}`;
 }

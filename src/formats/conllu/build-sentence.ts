@@ -1,0 +1,177 @@
+import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
+import type { DiagnosticCode } from '../../diagnostics/codes.js';
+import type { Comment, DependencySentence, DependencyWord, EmptyNode, MultiwordToken } from '../../model/dependency.js';
+import { LineIndex } from '../../model/line-index.js';
+import { COLUMNS, fieldColumn, type SourceLine } from './conllu-line.js';
+
+const WORD_ID = /^[1-9]\d*$/;
+const RANGE_ID = /^([1-9]\d*)-([1-9]\d*)$/;
+const EMPTY_ID = /^(0|[1-9]\d*)\.([1-9]\d*)$/;
+const HEAD = /^(0|[1-9]\d*)$/;
+const DEPREL = /^[a-z]+(:[a-z]+)?$/;
+const SENT_ID = /^#\s*sent_id\s*=\s*(.*)$/;
+const TEXT = /^#\s*text\s*=\s?(.*)$/;
+/** Columns where the specification allows spaces: FORM, LEMMA, MISC. */
+const SPACES_ALLOWED = new Set([1, 2, 9]);
+/** Columns a multiword token line leaves `_`: all but ID, FORM and MISC. */
+const MULTIWORD_BLANK = [2, 3, 4, 5, 6, 7, 8];
+
+/**
+ * Builds a sentence from its lines (comments and word lines, no blank line),
+ * checking the format as it goes (Universal Dependencies v2 format
+ * specification; ../shared/CHECK-VALUES.md §6). A sentence with at least one
+ * word line is returned even when it has problems, so that checks further on
+ * can run; its problems are reported.
+ */
+export function buildSentence(lines: SourceLine[], file: string, report: Report): DependencySentence | undefined {
+  return new SentenceBuilder(lines, file, report).build();
+}
+
+class SentenceBuilder {
+  private readonly source: LineIndex;
+
+  constructor(
+    private readonly lines: SourceLine[],
+    private readonly file: string,
+    private readonly report: Report,
+  ) {
+    const first = lines[0]!;
+    this.source = new LineIndex(lines.map((line) => line.text).join('\n'), { offset: first.offset, line: first.line, column: 1 });
+  }
+
+  build(): DependencySentence | undefined {
+    const comments: Comment[] = [];
+    const tokens: DependencySentence['lines'] = [];
+    let sentIds = 0;
+    let texts = 0;
+    let id: string | undefined;
+    let wordsSeen = false;
+    let expectedWord = 1;
+    let rangeEnd = 0;
+    let lastEmpty = { word: -1, index: 0 };
+    let lastRange: { line: SourceLine; end: number } | undefined;
+
+    for (const line of this.lines) {
+      const text = line.text.endsWith('\r') ? line.text.slice(0, -1) : line.text;
+      if (text.startsWith('#')) {
+        if (wordsSeen) this.problem('comment-after-words', line, 1, 'comment line after the word lines began; comments go before them');
+        comments.push({ type: 'comment', text: text.slice(1), position: this.span(line) });
+        const sentId = SENT_ID.exec(text);
+        if (sentId) {
+          if (++sentIds === 2) this.problem('repeated-comment', line, 1, 'a second "# sent_id" in one sentence');
+          else id = sentId[1]!.trim();
+        }
+        if (TEXT.test(text) && ++texts === 2) this.problem('repeated-comment', line, 1, 'a second "# text" in one sentence');
+        continue;
+      }
+      wordsSeen = true;
+      const fields = text.split('\t');
+      if (fields.length !== 10) {
+        const column = fields.length > 10 ? fieldColumn(fields, 10) : text.length + 1;
+        this.problem('wrong-column-count', line, column, `${fields.length} column${fields.length === 1 ? '' : 's'} where ten are needed`);
+        continue;
+      }
+      this.checkFields(line, fields);
+      const [idText, form, lemma, upos, xpos, feats, head, deprel, deps, misc] = fields as [string, string, string, string, string, string, string, string, string, string];
+      const columns = { id: idText, form, lemma, upos, xpos, feats, head, deprel, deps, misc, position: this.span(line) };
+      if (WORD_ID.test(idText)) {
+        const number = Number(idText);
+        if (number !== expectedWord) this.problem('id-sequence', line, 1, `word ${idText} where word ${expectedWord} comes next`);
+        if (lastRange && number === lastRange.end) lastRange = undefined;
+        expectedWord = number + 1;
+        lastEmpty = { word: number, index: 0 };
+        if (!HEAD.test(head)) this.problem('invalid-head', line, fieldColumn(fields, 6), `HEAD "${head}" is not 0 or a word number`);
+        if (!DEPREL.test(deprel)) this.problem('invalid-deprel', line, fieldColumn(fields, 7), `DEPREL "${deprel}" is not a relation such as "nsubj" or "obl:tmod"`);
+        tokens.push({ type: 'word', ...columns } satisfies DependencyWord);
+        continue;
+      }
+      const range = RANGE_ID.exec(idText);
+      if (range) {
+        const from = Number(range[1]);
+        const to = Number(range[2]);
+        if (to <= from) this.problem('bad-range', line, 1, `range ${idText} covers ${to < from ? 'no word' : 'a single word'}`);
+        else if (from <= rangeEnd) this.problem('bad-range', line, 1, `range ${idText} overlaps the range before it`);
+        else if (from !== expectedWord) this.problem('bad-range', line, 1, `range ${idText} must stand just before word ${from}`);
+        rangeEnd = Math.max(rangeEnd, to);
+        lastRange = { line, end: to };
+        const blank = MULTIWORD_BLANK.find((index) => fields[index] !== '_');
+        if (blank !== undefined) this.problem('multiword-fields', line, fieldColumn(fields, blank), 'a multiword token fills only ID, FORM and MISC; the other columns are "_"');
+        tokens.push({ type: 'multiword', ...columns } satisfies MultiwordToken);
+        continue;
+      }
+      const empty = EMPTY_ID.exec(idText);
+      if (empty) {
+        const word = Number(empty[1]);
+        const index = Number(empty[2]);
+        const after = expectedWord - 1;
+        if (word !== after || (lastEmpty.word === word ? index !== lastEmpty.index + 1 : index !== 1)) {
+          const next = lastEmpty.word === after ? lastEmpty.index + 1 : 1;
+          this.problem('empty-node-sequence', line, 1, `empty node ${idText} where ${after}.${next} comes next`);
+        }
+        lastEmpty = { word, index };
+        if (head !== '_' || deprel !== '_') {
+          this.problem('empty-node-fields', line, fieldColumn(fields, head !== '_' ? 6 : 7), 'an empty node has HEAD and DEPREL "_"; its relations go in DEPS');
+        } else if (deps === '_') {
+          this.problem('empty-node-fields', line, fieldColumn(fields, 8), 'an empty node needs DEPS');
+        }
+        tokens.push({ type: 'empty-node', ...columns } satisfies EmptyNode);
+        continue;
+      }
+      this.problem('invalid-id', line, 1, `ID "${idText}" is not a word number, a range like 1-2 or an empty node like 3.1`);
+    }
+
+    const first = this.lines[0]!;
+    if (tokens.length === 0) {
+      if (wordsSeen) return undefined; // every word line was reported already
+      this.problem('empty-sentence', first, 1, 'comment lines with no word line after them');
+      return undefined;
+    }
+    if (lastRange && lastRange.end >= expectedWord) {
+      this.problem('bad-range', lastRange.line, 1, `range runs past the last word, ${expectedWord - 1}`);
+    }
+    if (sentIds === 0) this.problem('missing-sent-id', first, 1, 'sentence without a "# sent_id" comment');
+    if (texts === 0) this.problem('missing-text', first, 1, 'sentence without a "# text" comment');
+    const sentence: DependencySentence = {
+      type: 'dependency-sentence',
+      comments,
+      lines: tokens,
+      id,
+      position: { start: first.offset, end: this.lines[this.lines.length - 1]!.offset + this.lines[this.lines.length - 1]!.text.length },
+      file: this.file,
+      source: this.source,
+    };
+    return sentence;
+  }
+
+  private checkFields(line: SourceLine, fields: string[]): void {
+    fields.forEach((field, index) => {
+      if (field === '') this.problem('empty-field', line, fieldColumn(fields, index), `empty ${columnName(index)} column; write "_" for unspecified`);
+      else if (!SPACES_ALLOWED.has(index) && field.includes(' ')) {
+        this.problem('space-in-field', line, fieldColumn(fields, index) + field.indexOf(' '), `space in the ${columnName(index)} column`);
+      }
+    });
+    if (!isNfc(line.text)) {
+      const index = fields.findIndex((field) => !isNfc(field));
+      this.problem('not-nfc', line, fieldColumn(fields, Math.max(index, 0)), `${columnName(Math.max(index, 0))} is not in Unicode normalization form C`);
+    }
+  }
+
+  private span(line: SourceLine) {
+    return { start: line.offset, end: line.offset + line.text.length };
+  }
+
+  private problem(code: DiagnosticCode, line: SourceLine, column: number, message: string): void {
+    const lines = new LineIndex(line.text, { offset: line.offset, line: line.line, column: 1 });
+    this.report(diagnose(code, message, { file: this.file, offset: line.offset + column - 1, lines }));
+  }
+}
+
+function columnName(index: number): string {
+  return COLUMNS[index] ?? 'extra';
+}
+
+/** ASCII text is always NFC; only other text needs normalizing to tell. */
+function isNfc(text: string): boolean {
+  // eslint-disable-next-line no-control-regex
+  return /^[\x00-\x7f]*$/.test(text) || text.normalize('NFC') === text;
+}

@@ -1,0 +1,132 @@
+import { createReadStream } from 'node:fs';
+import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
+import type { DiagnosticCode } from '../../diagnostics/codes.js';
+import type { DependencySentence } from '../../model/dependency.js';
+import { LineIndex } from '../../model/line-index.js';
+import { decodeStream, PIECE_SIZE } from '../bracketed/read-bracketed.js';
+import type { SourceLine } from './conllu-line.js';
+import { buildSentence } from './build-sentence.js';
+
+/** How the CoNLL-U reader reports and names things. */
+export interface ConlluReadOptions {
+  /** The file name put in diagnostics and on sentences; default `-`. */
+  file?: string;
+}
+
+/**
+ * Reads CoNLL-U sentence by sentence from text that arrives in pieces: memory
+ * holds one sentence and one line, never the file. Comments, columns and
+ * line order are kept as written. Problems of the format are reported through
+ * `report`; every sentence with at least one word line is handed on, so the
+ * sentences after a broken one are still read.
+ */
+export async function* readConllu(
+  pieces: AsyncIterable<string> | Iterable<string>,
+  options: ConlluReadOptions,
+  report: Report,
+): AsyncGenerator<DependencySentence> {
+  const reader = new LineReader(options.file ?? '-', report);
+  for await (const piece of pieces) {
+    reader.push(piece);
+    yield* reader.take();
+  }
+  reader.end();
+  yield* reader.take();
+}
+
+/** Reads a CoNLL-U file as a stream of sentences. */
+export function readConlluFile(path: string, options: ConlluReadOptions, report: Report): AsyncGenerator<DependencySentence> {
+  const pieces = decodeStream(createReadStream(path, { highWaterMark: PIECE_SIZE }));
+  return readConllu(pieces, { ...options, file: options.file ?? path }, report);
+}
+
+/** Reads every sentence of a string at once, for tests and small inputs. */
+export function readConlluText(text: string, options: ConlluReadOptions, report: Report): DependencySentence[] {
+  const reader = new LineReader(options.file ?? '-', report);
+  reader.push(text);
+  reader.end();
+  return reader.take();
+}
+
+class LineReader {
+  private rest = '';
+  private offset = 0;
+  private line = 1;
+  private first = true;
+  private lines: SourceLine[] = [];
+  /** A blank line was just read: a second one is one too many. */
+  private afterBlank = false;
+  private ready: DependencySentence[] = [];
+
+  constructor(
+    private readonly file: string,
+    private readonly report: Report,
+  ) {}
+
+  push(piece: string): void {
+    if (this.first) {
+      this.first = false;
+      if (piece.charCodeAt(0) === 0xfeff) {
+        piece = piece.slice(1);
+        this.offset = 0;
+      }
+    }
+    const text = this.rest + piece;
+    let from = 0;
+    for (let end = text.indexOf('\n'); end !== -1; end = text.indexOf('\n', from)) {
+      this.take1(text.slice(from, end));
+      from = end + 1;
+    }
+    this.rest = text.slice(from);
+  }
+
+  end(): void {
+    if (this.rest.length > 0) {
+      const last = this.rest;
+      this.rest = '';
+      this.problem('no-final-newline', { text: last, offset: this.offset, line: this.line }, last.length + 1, 'the file does not end with a line feed');
+      this.take1(last);
+    }
+    if (this.lines.length > 0) {
+      const lastLine = this.lines[this.lines.length - 1]!;
+      this.problem('missing-blank-line', lastLine, lastLine.text.length + 1, 'the last sentence is not followed by a blank line');
+      this.finish();
+    }
+  }
+
+  take(): DependencySentence[] {
+    const ready = this.ready;
+    this.ready = [];
+    return ready;
+  }
+
+  private take1(text: string): void {
+    const line: SourceLine = { text, offset: this.offset, line: this.line };
+    this.offset += text.length + 1;
+    this.line++;
+    if (text.endsWith('\r')) this.problem('carriage-return', line, text.length, 'line ends in CR LF; CoNLL-U lines end in LF');
+    if (text === '' || text === '\r') {
+      if (this.lines.length === 0) {
+        if (this.afterBlank || line.line === 1) this.problem('extra-blank-line', line, 1, 'a blank line where a sentence should begin');
+      } else {
+        this.finish();
+      }
+      this.afterBlank = true;
+      return;
+    }
+    this.afterBlank = false;
+    this.lines.push(line);
+  }
+
+  private finish(): void {
+    const lines = this.lines;
+    this.lines = [];
+    const sentence = buildSentence(lines, this.file, this.report);
+    if (sentence) this.ready.push(sentence);
+  }
+
+  private problem(code: DiagnosticCode, line: SourceLine, column: number, message: string): void {
+    const lines = new LineIndex(line.text, { offset: line.offset, line: line.line, column: 1 });
+    this.report(diagnose(code, message, { file: this.file, offset: line.offset + column - 1, lines }));
+  }
+}
