@@ -51,7 +51,8 @@ export class ConlluValidator {
     this.summary.words += words.length;
     checkDependencyTree(sentence, this.report);
     for (const word of words) {
-      if (word.deprel === '_' || this.relations.has(word.deprel)) continue;
+      // A relation of the wrong shape is an error of its own (invalid-deprel).
+      if (!/^[a-z]+(:[a-z]+)?$/.test(word.deprel) || this.relations.has(word.deprel)) continue;
       const universal = word.deprel.split(':')[0]!;
       if (this.relations.has(universal)) continue;
       this.warnAt(sentence, word, 7, `relation "${word.deprel}" is not in the declared set`);

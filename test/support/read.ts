@@ -26,3 +26,16 @@ export function validate(text: string, options: BracketedReadOptions = {}) {
   for (const tree of trees) validator.check(tree);
   return { trees, problems, summary: validator.summary };
 }
+
+import { readConlluText } from '../../src/formats/conllu/read-conllu.js';
+import { ConlluValidator } from '../../src/validate/validate-conllu.js';
+
+/** Reads and validates CoNLL-U text: the problems `treebridge validate` would print, and the sentences read. */
+export function validateConllu(text: string, relations?: string[]) {
+  const problems: Diagnostic[] = [];
+  const validator = new ConlluValidator((d) => problems.push(d), relations);
+  validator.startFile();
+  const sentences = readConlluText(text, { file: 't.conllu' }, validator.report);
+  for (const sentence of sentences) validator.check(sentence);
+  return { sentences, problems, summary: validator.summary };
+}

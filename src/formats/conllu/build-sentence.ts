@@ -19,9 +19,10 @@ const MULTIWORD_BLANK = [2, 3, 4, 5, 6, 7, 8];
 /**
  * Builds a sentence from its lines (comments and word lines, no blank line),
  * checking the format as it goes (Universal Dependencies v2 format
- * specification; ../shared/CHECK-VALUES.md §6). A sentence with at least one
- * word line is returned even when it has problems, so that checks further on
- * can run; its problems are reported.
+ * specification; ../shared/CHECK-VALUES.md §6). A sentence whose word lines
+ * can all be placed is returned even when it has other problems, so that the
+ * tree checks can run; one with a line that cannot be placed (wrong column
+ * count, bad ID, a gap in the IDs, a bad range) is reported and not returned.
  */
 export function buildSentence(lines: SourceLine[], file: string, report: Report): DependencySentence | undefined {
   return new SentenceBuilder(lines, file, report).build();
@@ -50,6 +51,8 @@ class SentenceBuilder {
     let rangeEnd = 0;
     let lastEmpty = { word: -1, index: 0 };
     let lastRange: { line: SourceLine; end: number } | undefined;
+    // A line that cannot be placed (wrong column count, bad ID, gap in IDs, bad range) leaves the tree unreadable: it is reported, not handed on.
+    let unreadable = false;
 
     for (const line of this.lines) {
       const text = line.text.endsWith('\r') ? line.text.slice(0, -1) : line.text;
@@ -69,6 +72,8 @@ class SentenceBuilder {
       if (fields.length !== 10) {
         const column = fields.length > 10 ? fieldColumn(fields, 10) : text.length + 1;
         this.problem('wrong-column-count', line, column, `${fields.length} column${fields.length === 1 ? '' : 's'} where ten are needed`);
+        unreadable = true;
+        if (WORD_ID.test(fields[0]!)) expectedWord = Number(fields[0]) + 1;
         continue;
       }
       this.checkFields(line, fields);
@@ -76,7 +81,9 @@ class SentenceBuilder {
       const columns = { id: idText, form, lemma, upos, xpos, feats, head, deprel, deps, misc, position: this.span(line) };
       if (WORD_ID.test(idText)) {
         const number = Number(idText);
-        if (number !== expectedWord) this.problem('id-sequence', line, 1, `word ${idText} where word ${expectedWord} comes next`);
+        // Once the sentence is unreadable, a gap left by the line that made it so is not news.
+        if (number !== expectedWord && !unreadable) this.problem('id-sequence', line, 1, `word ${idText} where word ${expectedWord} comes next`);
+        if (number !== expectedWord) unreadable = true;
         if (lastRange && number === lastRange.end) lastRange = undefined;
         expectedWord = number + 1;
         lastEmpty = { word: number, index: 0 };
@@ -89,9 +96,15 @@ class SentenceBuilder {
       if (range) {
         const from = Number(range[1]);
         const to = Number(range[2]);
-        if (to <= from) this.problem('bad-range', line, 1, `range ${idText} covers ${to < from ? 'no word' : 'a single word'}`);
-        else if (from <= rangeEnd) this.problem('bad-range', line, 1, `range ${idText} overlaps the range before it`);
-        else if (from !== expectedWord) this.problem('bad-range', line, 1, `range ${idText} must stand just before word ${from}`);
+        const rangeProblem =
+          to <= from ? `range ${idText} covers ${to < from ? 'no word' : 'a single word'}`
+          : from <= rangeEnd ? `range ${idText} overlaps the range before it`
+          : from !== expectedWord ? `range ${idText} must stand just before word ${from}`
+          : undefined;
+        if (rangeProblem) {
+          this.problem('bad-range', line, 1, rangeProblem);
+          unreadable = true;
+        }
         rangeEnd = Math.max(rangeEnd, to);
         lastRange = { line, end: to };
         const blank = MULTIWORD_BLANK.find((index) => fields[index] !== '_');
@@ -118,6 +131,7 @@ class SentenceBuilder {
         continue;
       }
       this.problem('invalid-id', line, 1, `ID "${idText}" is not a word number, a range like 1-2 or an empty node like 3.1`);
+      unreadable = true;
     }
 
     const first = this.lines[0]!;
@@ -128,9 +142,11 @@ class SentenceBuilder {
     }
     if (lastRange && lastRange.end >= expectedWord) {
       this.problem('bad-range', lastRange.line, 1, `range runs past the last word, ${expectedWord - 1}`);
+      unreadable = true;
     }
     if (sentIds === 0) this.problem('missing-sent-id', first, 1, 'sentence without a "# sent_id" comment');
     if (texts === 0) this.problem('missing-text', first, 1, 'sentence without a "# text" comment');
+    if (unreadable) return undefined;
     const sentence: DependencySentence = {
       type: 'dependency-sentence',
       comments,
