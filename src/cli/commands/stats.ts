@@ -1,0 +1,68 @@
+import { Option, type Command } from 'commander';
+import { CorpusStructureCounter } from '../../analysis/corpus-structure.js';
+import { formatCorpusStructure } from '../../analysis/format-structure.js';
+import { headVector } from '../../analysis/heads.js';
+import { analyseTree } from '../../analysis/structure.js';
+import type { Diagnostic } from '../../diagnostics/diagnostic.js';
+import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { checkDependencyTree } from '../../validate/check-dependency-tree.js';
+import { ExitCode, type CommandResult } from '../exit-codes.js';
+import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
+import { openInputs, Output, type CliIO } from '../io.js';
+import { readSentencesOf } from '../read-trees.js';
+
+export function registerStats(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
+  program
+    .command('stats')
+    .description('measure the structure of dependency trees: projectivity, gap and edge degree, well-nestedness, arc lengths')
+    .argument('<files...>', 'CoNLL-U files, or - for standard input')
+    .addOption(new Option('--from <format>', 'input format (default: by extension)').choices([...inputFormats]))
+    .option('--json', 'print the figures as JSON')
+    .option('--arcs', 'list each sentence with non-projective arcs, with the gap of each arc')
+    .option('-o, --output <file>', 'write the report to a file (default: standard output)')
+    .action(async (files: string[], options: Record<string, unknown>) => done(await stats(files, options, io)));
+}
+
+async function stats(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+  const { inputs, failures } = await openInputs(files, io);
+  const format = commonFormat(inputs, options.from as InputFormat | undefined);
+  if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  if (format === 'bracketed') {
+    return { code: ExitCode.UsageOrIO, messages: ['stats reads CoNLL-U; bracketed input needs a head table to convert it first (--heads), which is not available yet'] };
+  }
+  const output = Output.to(options.output as string | undefined, io);
+  const counter = new CorpusStructureCounter();
+  let errors = 0;
+  let skipped = 0;
+  const problem = (diagnostic: Diagnostic) => {
+    if (diagnostic.severity === 'error') errors++;
+    io.stderr.write(formatDiagnostic(diagnostic) + '\n');
+  };
+  try {
+    for await (const sentence of readSentencesOf(inputs, problem, io)) {
+      // Only a tree can be measured: a sentence that is not one is reported and left out.
+      const before = errors;
+      checkDependencyTree(sentence, problem);
+      const heads = headVector(sentence);
+      if (errors > before || !heads) {
+        skipped++;
+        continue;
+      }
+      const structure = analyseTree(heads);
+      counter.add(structure);
+      if (options.arcs === true && structure.nonProjectiveArcs.length > 0) {
+        const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
+        if (options.json !== true) await output.write(`${sentence.id ?? `${sentence.file}:${sentence.source?.start.line}`}: ${arcs.join(', ')}\n`);
+      }
+    }
+    const result = counter.result();
+    await output.write(options.json === true ? JSON.stringify(result, null, 2) + '\n' : (options.arcs === true ? '\n' : '') + formatCorpusStructure(result));
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+  if (skipped > 0) io.stderr.write(`treebridge: ${skipped} sentence${skipped === 1 ? '' : 's'} left out: not trees (see above)\n`);
+  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
