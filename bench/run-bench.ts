@@ -80,3 +80,19 @@ try {
 } finally {
   rmSync(dir, { recursive: true, force: true });
 }
+
+// stats: structure analysis of every shared CoNLL-U file (GUM dep CC BY 4.0; UD EWT and CAC dev CC BY-SA 4.0).
+const conllu = ['gum/dep', 'ud'].flatMap((sub) =>
+  readdirSync(join(corpora, sub)).filter((name) => name.endsWith('.conllu')).sort().map((name) => join(corpora, sub, name)),
+);
+const conlluMB = conllu.reduce((sum, file) => sum + statSync(file).size, 0) / 1048576;
+const statsRuns: Measure[] = [];
+for (let round = 0; round < rounds; round++) {
+  statsRuns.push(JSON.parse(execFileSync(process.execPath, [...nodeFlags, join(here, 'stats-worker.js'), ...conllu], { encoding: 'utf8', maxBuffer: 1 << 24 })));
+}
+const statsMeasure = fastest(statsRuns);
+const words = (statsMeasure as Measure & { words: number }).words;
+console.log(`
+stats on ${conllu.length} CoNLL-U files, ${conlluMB.toFixed(1)} MB (fastest of ${rounds}):`);
+console.log(`${'reader'.padEnd(30)} ${'sentences'.padStart(9)} ${'seconds'.padStart(8)} ${'MB/s'.padStart(7)} ${'sent./s'.padStart(9)} ${'peak MB'.padStart(8)}`);
+console.log(row('treebridge stats', conlluMB, statsMeasure) + `   (${Math.round(words / statsMeasure.seconds).toLocaleString('en-US')} words/s)`);

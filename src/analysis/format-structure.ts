@@ -20,8 +20,12 @@ export function formatCorpusStructure(s: CorpusStructure): string {
   const within = (limit: number) => lengths.filter(([length]) => Number(length) <= limit).reduce((sum, [, n]) => sum + n, 0);
   lines.push('', 'arcs by length');
   lines.push(...distribution(Object.fromEntries(lengths.slice(0, 10)), s.arcs));
-  if (lengths.length > 10) lines.push(`  longer: ${number(s.arcs - within(Number(lengths[9]![0])))}`);
-  lines.push(`  length 1: ${share(within(1), s.arcs).trim()}; length 3 or less: ${share(within(3), s.arcs).trim()}`);
+  if (lengths.length > 10) {
+    const longer = s.arcs - within(Number(lengths[9]![0]));
+    lines.push(`  longer: ${number(longer)}${share(longer, s.arcs)}`);
+  }
+  const percent = (n: number) => (s.arcs === 0 ? '0%' : `${((100 * n) / s.arcs).toFixed(2)}%`);
+  lines.push(`  length 1: ${percent(within(1))} of arcs; length 3 or less: ${percent(within(3))}`);
   return lines.join('\n') + '\n';
 }
 

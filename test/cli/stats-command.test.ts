@@ -1,0 +1,36 @@
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { cli } from '../support/cli.js';
+import { projectRoot } from '../support/corpora.js';
+
+const fixture = join(projectRoot, 'test/fixtures/conllu/harbour.conllu');
+
+describe('treebridge stats', () => {
+  it('prints the figures as JSON with the agreed keys', async () => {
+    const { code, stdout } = await cli(['stats', '--json', fixture]);
+    expect(code).toBe(0);
+    const figures = JSON.parse(stdout);
+    expect(Object.keys(figures)).toEqual([
+      'sentences', 'words', 'arcs', 'nonProjectiveSentences', 'nonProjectiveArcs', 'gapDegree', 'edgeDegree', 'wellNestedSentences', 'arcLength',
+    ]);
+    expect(figures).toMatchObject({ sentences: 3, words: 21, arcs: 18, nonProjectiveSentences: 0, gapDegree: { 0: 3 } });
+  });
+
+  it('lists the non-projective arcs of each sentence with their gaps on request', async () => {
+    // Word 4 hangs from word 2 across word 3, which hangs from the root word 1 (a shape of our own).
+    const text = '# sent_id = x1\n# text = a b c d\n1\ta\ta\tX\t_\t_\t0\troot\t_\t_\n2\tb\tb\tX\t_\t_\t1\tdep\t_\t_\n3\tc\tc\tX\t_\t_\t1\tdep\t_\t_\n4\td\td\tX\t_\t_\t2\tdep\t_\t_\n\n';
+    const { code, stdout } = await cli(['stats', '--arcs', '--from', 'conllu', '-'], { stdin: text });
+    expect(code).toBe(0);
+    expect(stdout.split('\n')[0]).toBe('x1: 2→4 (gap 3)');
+    expect(stdout).toMatch(/non-projective sentences\s+1 \(100\.00%\)/);
+  });
+
+  it('reports a sentence that is not a tree on standard error, leaves it out and exits 1', async () => {
+    const text = '# sent_id = x1\n# text = a b\n1\ta\ta\tX\t_\t_\t2\tdep\t_\t_\n2\tb\tb\tX\t_\t_\t1\tdep\t_\t_\n\n';
+    const { code, stdout, stderr } = await cli(['stats', '--json', '--from', 'conllu', '-'], { stdin: text });
+    expect(code).toBe(1);
+    expect(JSON.parse(stdout).sentences).toBe(0);
+    expect(stderr).toMatch(/^-:3:\d+: error: .*\[(no-root|cycle)\]/m);
+    expect(stderr).toMatch(/1 sentence left out/);
+  });
+});
