@@ -30,6 +30,12 @@ export const diagnosticCodes = {
   'missing-id': { severity: 'warning', meaning: 'a tree has no identifier while others in its file have one' },
   'no-words': { severity: 'warning', meaning: 'a tree holds no words' },
   'missing-lemma': { severity: 'warning', meaning: 'lemma splitting is on but a word has no `-lemma` part' },
+  // Conversion.
+  'nothing-to-convert': { severity: 'warning', meaning: 'a tree without words (only empty elements or notes) is skipped' },
+  // Head and label tables.
+  'table-syntax': { severity: 'error', meaning: 'a line of a table that does not parse' },
+  'table-invalid': { severity: 'error', meaning: 'a statement of a table that parses but makes no sense' },
+  'table-not-found': { severity: 'error', meaning: 'a table named or built on that cannot be found' },
   // CoNLL-U (Universal Dependencies v2 format specification; ../shared/CHECK-VALUES.md §6).
   'wrong-column-count': { severity: 'error', meaning: 'a word line without exactly ten tab-separated columns' },
   'empty-field': { severity: 'error', meaning: 'an empty column; unspecified values are written `_`' },

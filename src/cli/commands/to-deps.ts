@@ -1,0 +1,64 @@
+import { basename } from 'node:path';
+import type { Command } from 'commander';
+import { convertTree } from '../../convert/convert-tree.js';
+import { diagnose, type Diagnostic } from '../../diagnostics/diagnostic.js';
+import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { writeSentence } from '../../formats/conllu/write-conllu.js';
+import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { ExitCode, type CommandResult } from '../exit-codes.js';
+import { openInputs, Output, type CliIO } from '../io.js';
+import { readTreesOf } from '../read-trees.js';
+
+export function registerToDeps(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
+  const command = program
+    .command('to-deps')
+    .description('convert bracketed trees to dependency trees in CoNLL-U')
+    .argument('<files...>', 'bracketed files, or - for standard input')
+    .option('-o, --output <file>', 'write the CoNLL-U to a file (default: standard output)');
+  addConversionOptions(command);
+  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await toDeps(files, options, io)));
+}
+
+async function toDeps(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+  const settings = conversionSettings(options);
+  if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+  const { inputs, failures } = await openInputs(files, io);
+  const output = Output.to(options.output as string | undefined, io);
+  let errors = 0;
+  const report = (diagnostic: Diagnostic) => {
+    if (diagnostic.severity === 'error') errors++;
+    io.stderr.write(formatDiagnostic(diagnostic) + '\n');
+  };
+  let read = 0;
+  let converted = 0;
+  let skipped = 0;
+  let treeInFile = 0;
+  try {
+    const trees = readTreesOf(inputs, bracketedReadOptions(options), report, io, () => (treeInFile = 0));
+    for await (const tree of trees) {
+      read++;
+      treeInFile++;
+      const file = tree.file ?? '-';
+      const id = tree.id ?? `${basename(file)}-${treeInFile}`;
+      const conversion = convertTree(tree, settings, id, `${file}#${treeInFile}`);
+      if (!conversion) {
+        skipped++;
+        if (tree.source && tree.position) {
+          report(diagnose('nothing-to-convert', 'tree has no words (only empty elements or notes); skipped', { file, offset: tree.position.start, lines: tree.source }));
+        }
+        continue;
+      }
+      converted++;
+      await output.write(writeSentence(conversion.sentence));
+    }
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+  const notRead = errors > 0 ? `; ${errors} problem${errors === 1 ? '' : 's'} kept trees from being read (above)` : '';
+  io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read: ${converted} converted, ${skipped} skipped${notRead}\n`);
+  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}

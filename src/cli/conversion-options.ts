@@ -1,0 +1,34 @@
+import { Option, type Command } from 'commander';
+import type { ConversionSettings } from '../convert/convert-tree.js';
+import { formatDiagnostic } from '../diagnostics/format-diagnostic.js';
+import { loadHeadTable, loadLabelTable, TableError } from '../tables/load-table.js';
+import { loadPosMap } from '../tables/load-pos-map.js';
+
+/** The options of every command that converts bracketed trees to dependencies. */
+export function addConversionOptions(command: Command, headsRequired = true): Command {
+  const heads = new Option('--heads <table>', 'head table: a name in headrules/ (generic, en-function, en-content, penn-historical) or a path');
+  return command
+    .addOption(headsRequired ? heads.makeOptionMandatory() : heads)
+    .option('--labels <table>', 'label table: a name in headrules/ (en-ud) or a path; without one, function tags give the labels')
+    .addOption(new Option('--traces <mode>', 'surface: phrases attach where they stand; restore: antecedents of *T* *ICH* *EXP* *RNR* attach where their traces stand').choices(['surface', 'restore']).default('surface'))
+    .addOption(new Option('--coordination <style>', 'which conjunct heads a coordination: first (as in UD), last, conjunction, or table (the head table decides)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
+    .addOption(new Option('--punctuation <policy>', 'where punctuation attaches: phrase (to the head of its phrase) or root').choices(['phrase', 'root']).default('phrase'))
+    .option('--pos-map <map>', 'POS map giving UPOS from the tags: a name in headrules/ (en-ptb) or a path');
+}
+
+/** The settings from the parsed options, or the table problems as printable lines. */
+export function conversionSettings(options: Record<string, unknown>): ConversionSettings | { problems: string[] } {
+  try {
+    return {
+      heads: loadHeadTable(options.heads as string),
+      labels: typeof options.labels === 'string' ? loadLabelTable(options.labels) : undefined,
+      traces: options.traces as ConversionSettings['traces'],
+      coordination: options.coordination as ConversionSettings['coordination'],
+      punctuation: options.punctuation as ConversionSettings['punctuation'],
+      upos: typeof options.posMap === 'string' ? loadPosMap(options.posMap) : undefined,
+    };
+  } catch (error) {
+    if (!(error instanceof TableError)) throw error;
+    return { problems: error.diagnostics.map((d) => formatDiagnostic(d, { source: true })) };
+  }
+}

@@ -1,0 +1,35 @@
+import type { LabelContext, LabelTable } from '../tables/table-model.js';
+import type { Attachment } from './attach-dependents.js';
+import { candidateOf } from './find-heads.js';
+
+/**
+ * The relation of every attachment: `root` for the root; with a label table,
+ * the relation of its first rule whose conditions all hold (else its
+ * `otherwise`); without one, `conj` and `cc` in coordinations, else the first
+ * function tag of the dependent's phrase (lower-cased letters), else `dep`.
+ */
+export function assignLabels(attachments: Attachment[], table: LabelTable | undefined): string[] {
+  return attachments.map((attachment) => {
+    if (!attachment.governor || !attachment.parent || !attachment.headNode) return 'root';
+    if (!table) return untabled(attachment);
+    const word = attachment.dependent;
+    const context: LabelContext = {
+      dependent: candidateOf(attachment.node),
+      head: candidateOf(attachment.headNode),
+      parent: candidateOf(attachment.parent),
+      word: { pos: word.pos, form: word.form, lemma: word.lemma },
+      side: word.index < attachment.governor.index ? 'left' : 'right',
+      role: attachment.role,
+    };
+    for (const rule of table.rules) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
+    return table.otherwise;
+  });
+}
+
+function untabled(attachment: Attachment): string {
+  if (attachment.role === 'conjunct') return 'conj';
+  if (attachment.role === 'coordinator') return 'cc';
+  const tag = attachment.node.kind === 'phrase' ? attachment.node.functions[0] : undefined;
+  const letters = tag?.toLowerCase().replace(/[^a-z]/g, '');
+  return letters ? letters : 'dep';
+}

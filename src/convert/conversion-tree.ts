@@ -1,0 +1,58 @@
+/**
+ * The tree the conversion passes work on: the words of a bracketed tree with
+ * their phrases, empty elements and notes taken out (and, when traces are
+ * restored, antecedents moved to where their traces stood). Built by
+ * prepare-tree; find-heads fills `head`.
+ */
+import type { Phrase, Preterminal } from '../model/constituency.js';
+
+/** A word of the sentence. */
+export interface WordNode {
+  kind: 'word';
+  /** Position in the sentence, from 1. */
+  index: number;
+  /** Category and function tags of its tag, for patterns (`N-N` is category N, tag N). */
+  category: string;
+  functions: readonly string[];
+  /** The tag as written. */
+  pos: string;
+  form: string;
+  lemma: string | undefined;
+  /** The bracket it was read from. */
+  source: Preterminal;
+}
+
+/** A phrase over at least one word. */
+export interface PhraseNode {
+  kind: 'phrase';
+  category: string;
+  functions: readonly string[];
+  /** The label as written. */
+  label: string;
+  children: ConversionNode[];
+  /** Filled by find-heads: which child heads the phrase, and why. */
+  head?: HeadChoice;
+  /** Filled by find-heads when the phrase is a coordination drawn in a style. */
+  coordination?: import('./handle-coordination.js').Coordination;
+  /** The bracket it was read from; absent for the sentence-level group of several top nodes. */
+  source?: Phrase;
+}
+
+/** Why a child heads its phrase: the step of the table (or the rule) that chose it. */
+export interface HeadChoice {
+  /** Index of the head child. */
+  child: number;
+  /** How it was chosen, for `heads explain`: `VP line 12: left each TO VBD …`. */
+  reason: string;
+  /** The table line of the step, when a step chose it. */
+  line?: number;
+}
+
+export type ConversionNode = WordNode | PhraseNode;
+
+/** The word a node's heads lead down to. */
+export function headWordOf(node: ConversionNode): WordNode {
+  let current = node;
+  while (current.kind === 'phrase') current = current.children[current.head?.child ?? 0]!;
+  return current;
+}

@@ -1,0 +1,65 @@
+import type { Tree } from '../model/constituency.js';
+import type { DependencySentence, DependencyWord } from '../model/dependency.js';
+import type { HeadTable, LabelTable } from '../tables/table-model.js';
+import { assignLabels } from './assign-labels.js';
+import { attachDependents, type PunctuationPolicy } from './attach-dependents.js';
+import type { ConversionNode, WordNode } from './conversion-tree.js';
+import { findHeads } from './find-heads.js';
+import type { CoordinationStyle } from './handle-coordination.js';
+import { prepareTree, type TraceMode } from './prepare-tree.js';
+
+/** Everything a conversion needs besides the tree. */
+export interface ConversionSettings {
+  heads: HeadTable;
+  labels?: LabelTable;
+  traces: TraceMode;
+  coordination: CoordinationStyle;
+  punctuation: PunctuationPolicy;
+  /** Universal POS by tag, when a POS map is given. */
+  upos?: Map<string, string>;
+}
+
+/** A converted tree: the CoNLL-U sentence, and the prepared tree with its heads, for explanations. */
+export interface Conversion {
+  sentence: DependencySentence;
+  root: ConversionNode;
+  words: WordNode[];
+}
+
+/**
+ * Converts a bracketed tree into a dependency sentence, pass by pass:
+ * prepare-tree, find-heads (coordination included), attach-dependents,
+ * assign-labels. `id` becomes `# sent_id`; `origin` names the source tree in
+ * each word's MISC. Undefined for a tree without words.
+ */
+export function convertTree(tree: Tree, settings: ConversionSettings, id: string, origin: string): Conversion | undefined {
+  const prepared = prepareTree(tree, settings.traces);
+  if (!prepared) return undefined;
+  const { root, words } = prepared;
+  findHeads(root, settings.heads, settings.coordination);
+  const attachments = attachDependents(root, words, settings.heads, settings.coordination, settings.punctuation);
+  const relations = assignLabels(attachments, settings.labels);
+  const lines: DependencyWord[] = words.map((word, i) => ({
+    type: 'word',
+    id: String(word.index),
+    form: word.form,
+    lemma: word.lemma ?? '_',
+    upos: settings.upos?.get(word.pos) ?? '_',
+    xpos: word.pos,
+    feats: '_',
+    head: String(attachments[i]!.governor?.index ?? 0),
+    deprel: relations[i]!,
+    deps: '_',
+    misc: `From=${origin}`,
+  }));
+  const sentence: DependencySentence = {
+    type: 'dependency-sentence',
+    comments: [
+      { type: 'comment', text: ` sent_id = ${id}` },
+      { type: 'comment', text: ` text = ${words.map((w) => w.form).join(' ')}` },
+    ],
+    lines,
+    id,
+  };
+  return { sentence, root, words };
+}

@@ -1,0 +1,94 @@
+import type { Candidate } from '../tables/label-pattern.js';
+import type { HeadTable } from '../tables/table-model.js';
+import type { PhraseNode } from './conversion-tree.js';
+
+/**
+ * How coordination is drawn:
+ * - `first`: the first conjunct heads; further conjuncts hang from it; a
+ *   coordinator and the punctuation before a conjunct hang from that conjunct
+ *   (as in Universal Dependencies);
+ * - `last`: the last conjunct heads; the rest hang from it;
+ * - `conjunction`: the (last) coordinator heads; conjuncts and the rest hang from it;
+ * - `table`: no special treatment: the head table decides, every other child hangs from the head.
+ * Shared dependents (children that are neither conjuncts, coordinators nor
+ * punctuation) hang from the head in every style.
+ */
+export type CoordinationStyle = 'first' | 'last' | 'conjunction' | 'table';
+
+/** The parts of a coordinated phrase, as child indices. */
+export interface Coordination {
+  conjuncts: number[];
+  coordinators: number[];
+  /** Punctuation children between the first and the last conjunct. */
+  separators: number[];
+}
+
+/**
+ * Finds coordination in a phrase: a coordinator with a conjunct before and
+ * after it. Conjuncts are the child just before the first coordinator, those
+ * before it separated by punctuation only, and the child just after each
+ * coordinator (with the punctuation-separated ones after that, up to the next
+ * coordinator).
+ */
+export function findCoordination(phrase: PhraseNode, candidates: Candidate[], table: HeadTable): Coordination | undefined {
+  const n = candidates.length;
+  const isCoordinator = (i: number) => table.coordinators(candidates[i]!);
+  const isPunctuation = (i: number) => table.punctuation(candidates[i]!);
+  const coordinators: number[] = [];
+  for (let i = 1; i < n - 1; i++) if (isCoordinator(i)) coordinators.push(i);
+  if (coordinators.length === 0) return undefined;
+  const content = (i: number) => i >= 0 && i < n && !isCoordinator(i) && !isPunctuation(i);
+  const first = coordinators[0]!;
+  // The conjunct before the first coordinator, skipping punctuation.
+  let before = first - 1;
+  while (before >= 0 && isPunctuation(before)) before--;
+  if (!content(before)) return undefined;
+  const conjuncts = [before];
+  // Further back, conjuncts separated by punctuation only.
+  for (let i = before - 1; i >= 1 && isPunctuation(i) && content(i - 1); i -= 2) conjuncts.unshift(i - 1);
+  // After each coordinator: the next content child, and punctuation-separated ones up to the next coordinator.
+  for (const c of coordinators) {
+    let after = c + 1;
+    while (after < n && isPunctuation(after)) after++;
+    if (!content(after) || conjuncts.includes(after)) continue;
+    conjuncts.push(after);
+    for (let i = after + 1; i + 1 < n && isPunctuation(i) && content(i + 1) && !isCoordinator(i + 1); i += 2) {
+      if (coordinators.some((k) => k > i)) conjuncts.push(i + 1);
+      else break;
+    }
+  }
+  if (conjuncts.length < 2) return undefined;
+  conjuncts.sort((a, b) => a - b);
+  const low = conjuncts[0]!;
+  const high = conjuncts[conjuncts.length - 1]!;
+  const separators: number[] = [];
+  for (let i = low + 1; i < high; i++) if (isPunctuation(i)) separators.push(i);
+  return { conjuncts, coordinators: coordinators.filter((k) => k > low && k < high), separators };
+}
+
+/** The head child of a coordinated phrase in a style. */
+export function coordinationHead(coordination: Coordination, style: Exclude<CoordinationStyle, 'table'>): number {
+  if (style === 'first') return coordination.conjuncts[0]!;
+  if (style === 'last') return coordination.conjuncts[coordination.conjuncts.length - 1]!;
+  return coordination.coordinators[coordination.coordinators.length - 1] ?? coordination.conjuncts[0]!;
+}
+
+/**
+ * Where each child of a coordinated phrase attaches, by child index (the head
+ * child maps to itself), with its part in the coordination.
+ */
+export function coordinationAttachments(
+  childCount: number,
+  coordination: Coordination,
+  style: Exclude<CoordinationStyle, 'table'>,
+): Array<{ to: number; role: 'conjunct' | 'coordinator' | 'other' }> {
+  const head = coordinationHead(coordination, style);
+  const { conjuncts, coordinators, separators } = coordination;
+  const nextConjunct = (i: number) => conjuncts.find((c) => c > i) ?? head;
+  return Array.from({ length: childCount }, (_, i) => {
+    const role = conjuncts.includes(i) ? 'conjunct' : coordinators.includes(i) ? 'coordinator' : 'other';
+    if (i === head) return { to: i, role };
+    if (style === 'first' && (coordinators.includes(i) || separators.includes(i))) return { to: nextConjunct(i), role };
+    return { to: head, role };
+  });
+}

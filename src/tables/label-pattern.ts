@@ -1,0 +1,67 @@
+import { parseLabel } from '../model/label.js';
+import type { HeadWordTestSyntax, PatternSyntax } from './table-syntax.js';
+
+/** What a pattern looks at: a child of a phrase, by its label and its head word. */
+export interface Candidate {
+  /** Category of the child's label (a preterminal's tag is parsed like a label: `N-N` is category N, tag N). */
+  category: string;
+  /** Function tags of the child's label. */
+  functions: readonly string[];
+  /** The child's lexical head word, when it has one. */
+  headWord?: { pos: string; form: string; lemma: string | undefined };
+}
+
+/** A compiled pattern. */
+export type Matcher = (candidate: Candidate) => boolean;
+
+/**
+ * Compiles a label pattern: `NP` (category NP, any function tags), `NP-PRD`
+ * (and function tag PRD), `*-PRD` (any category with PRD), `VB*` (category
+ * starting VB), `*` (anything); a head-word test `[pos=…]`, `[form=…]` or
+ * `[lemma=…]` narrows it (values may end in `*` for a prefix; forms and lemmas
+ * compare without case).
+ */
+export function compilePattern(pattern: PatternSyntax): Matcher {
+  const label = compileLabel(pattern.label);
+  if (!pattern.test) return label;
+  const test = compileHeadWordTest(pattern.test);
+  return (candidate) => label(candidate) && test(candidate);
+}
+
+function compileLabel(text: string): Matcher {
+  if (text === '*') return () => true;
+  if (text.startsWith('*-')) {
+    const tags = text.slice(2).split('-');
+    return (candidate) => tags.every((tag) => candidate.functions.includes(tag));
+  }
+  if (text.endsWith('*') && text.length > 1) {
+    const prefix = text.slice(0, -1);
+    return (candidate) => candidate.category.startsWith(prefix);
+  }
+  const wanted = parseLabel(text);
+  if (wanted.functions.length === 0) return (candidate) => candidate.category === wanted.category;
+  return (candidate) => candidate.category === wanted.category && wanted.functions.every((tag) => candidate.functions.includes(tag));
+}
+
+function compileHeadWordTest(test: HeadWordTestSyntax): Matcher {
+  const matches = valueTest(test.values, test.key !== 'pos');
+  return (candidate) => {
+    const word = candidate.headWord;
+    if (!word) return false;
+    if (test.key === 'pos') return matches(word.pos);
+    if (test.key === 'form') return matches(word.form);
+    return matches(word.lemma ?? word.form);
+  };
+}
+
+/** A test of a value against a list: exact, or a prefix for values ending in `*`; without case when asked. */
+export function valueTest(values: string[], ignoreCase: boolean): (value: string) => boolean {
+  const norm = (value: string) => (ignoreCase ? value.toLowerCase() : value);
+  const exact = new Set(values.filter((v) => !v.endsWith('*') || v === '*').map(norm));
+  const prefixes = values.filter((v) => v.endsWith('*') && v !== '*').map((v) => norm(v.slice(0, -1)));
+  if (exact.has('*')) return () => true;
+  return (value) => {
+    const v = norm(value);
+    return exact.has(v) || prefixes.some((prefix) => v.startsWith(prefix));
+  };
+}

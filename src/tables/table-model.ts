@@ -1,0 +1,78 @@
+import type { Matcher } from './label-pattern.js';
+
+/** One step of a head block: from which end to look, how, and for what. */
+export interface HeadStep {
+  end: 'left' | 'right';
+  /**
+   * `each`: the patterns one at a time, each time over the children from that end;
+   * `any`: the first child from that end matching any pattern;
+   * `only`: the child at that end, if it matches any pattern;
+   * `first`: the first child from that end that is not punctuation.
+   */
+  mode: 'each' | 'any' | 'only' | 'first';
+  patterns: Matcher[];
+  /** The patterns as written, for explanations. */
+  written: string[];
+  /** Where the step stands: file and 1-based line. */
+  file: string;
+  line: number;
+}
+
+/** The steps for some parent categories. */
+export interface HeadBlock {
+  categories: string[];
+  steps: HeadStep[];
+}
+
+/** A compiled head table. */
+export interface HeadTable {
+  kind: 'heads';
+  name: string;
+  /** Blocks by parent category. */
+  blocks: Map<string, HeadBlock>;
+  /** The default block, for categories without one. */
+  fallback: HeadBlock;
+  /** Punctuation labels. */
+  punctuation: Matcher;
+  /** Coordinating conjunctions and their phrases. */
+  coordinators: Matcher;
+  /** `collins`: a head just after a coordinator that is not the first child gives way to the child before it. */
+  coordinationRule: 'collins' | undefined;
+}
+
+/** A condition of a label rule, compiled. */
+export interface LabelCondition {
+  key: 'dependent' | 'head' | 'parent' | 'pos' | 'form' | 'lemma' | 'side' | 'role';
+  test: (context: LabelContext) => boolean;
+}
+
+/** What a label rule looks at: an attachment of a dependent to its head. */
+export interface LabelContext {
+  /** The dependent's maximal projection (a phrase or a preterminal), as a label candidate. */
+  dependent: import('./label-pattern.js').Candidate;
+  /** The head child of the phrase the dependent attaches in. */
+  head: import('./label-pattern.js').Candidate;
+  /** That phrase. */
+  parent: import('./label-pattern.js').Candidate;
+  /** The dependent's head word. */
+  word: { pos: string; form: string; lemma: string | undefined };
+  /** Where the dependent stands from its head. */
+  side: 'left' | 'right';
+  /** Its part in a coordination: a further conjunct, a coordinator, or neither. */
+  role: 'conjunct' | 'coordinator' | 'other';
+}
+
+export interface LabelRule {
+  relation: string;
+  conditions: LabelCondition[];
+  file: string;
+  line: number;
+}
+
+/** A compiled label table: rules tried in order, the first that matches gives the relation. */
+export interface LabelTable {
+  kind: 'labels';
+  name: string;
+  rules: LabelRule[];
+  otherwise: string;
+}
