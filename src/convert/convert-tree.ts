@@ -5,6 +5,7 @@ import { assignLabels } from './assign-labels.js';
 import { attachDependents, type PunctuationPolicy } from './attach-dependents.js';
 import type { ConversionNode, WordNode } from './conversion-tree.js';
 import { findHeads } from './find-heads.js';
+import { oracleChooser } from './oracle-heads.js';
 import type { CoordinationStyle } from './handle-coordination.js';
 import { prepareTree, type TraceMode } from './prepare-tree.js';
 
@@ -17,6 +18,8 @@ export interface ConversionSettings {
   punctuation: PunctuationPolicy;
   /** Universal POS by tag, when a POS map is given. */
   upos?: Map<string, string>;
+  /** Gold heads of the words, to convert as the head-percolation oracle does (see oracle-heads). */
+  oracle?: readonly number[];
 }
 
 /** A converted tree: the CoNLL-U sentence, and the prepared tree with its heads, for explanations. */
@@ -36,7 +39,7 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   const prepared = prepareTree(tree, settings.traces);
   if (!prepared) return undefined;
   const { root, words } = prepared;
-  findHeads(root, settings.heads, settings.coordination);
+  findHeads(root, settings.heads, settings.coordination, settings.oracle ? oracleChooser(settings.oracle) : undefined);
   const attachments = attachDependents(root, words, settings.heads, settings.coordination, settings.punctuation);
   const relations = assignLabels(attachments, settings.labels);
   const lines: DependencyWord[] = words.map((word, i) => ({

@@ -16,9 +16,22 @@ export function candidateOf(node: ConversionNode): Candidate {
  * child that is not punctuation. A coordinated phrase then takes the head its
  * coordination style gives (handle-coordination). Fills `head` on every phrase.
  */
-export function findHeads(root: ConversionNode, table: HeadTable, style: CoordinationStyle = 'table'): void {
+export function findHeads(
+  root: ConversionNode,
+  table: HeadTable,
+  style: CoordinationStyle = 'table',
+  oracle?: (phrase: PhraseNode) => number | undefined,
+): void {
   if (root.kind !== 'phrase') return;
-  for (const child of root.children) findHeads(child, table, style);
+  for (const child of root.children) findHeads(child, table, style, oracle);
+  const chosen = oracle?.(root);
+  if (chosen !== undefined && chosen >= 0) {
+    // The oracle knows the head; coordination still attaches coordinators and separators by the style.
+    root.head = { child: chosen, reason: 'oracle: the child holding the gold head' };
+    const coordination = style === 'table' ? undefined : findCoordination(root, root.children.map(candidateOf), table);
+    if (coordination && style !== 'table' && coordinationHead(coordination, style) === chosen) root.coordination = coordination;
+    return;
+  }
   root.head = chooseHead(root, table);
   if (style === 'table') return;
   const coordination = findCoordination(root, root.children.map(candidateOf), table);

@@ -1,0 +1,30 @@
+// Development tool: converts the shared GUM trees (CC BY 4.0) and scores them
+// against the gold dependencies, with the oracle, and prints the commonest errors.
+// node dist/bench/score-gum.js HEADS [LABELS]
+import { readdirSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { readBracketedFile } from '../src/formats/bracketed/read-bracketed.js';
+import { readConlluFile } from '../src/formats/conllu/read-conllu.js';
+import { scoreConversion } from '../src/evaluate/score-conversion.js';
+import { loadHeadTable, loadLabelTable } from '../src/tables/load-table.js';
+
+const corpora = process.env.TREEBRIDGE_CORPORA ?? resolve(process.cwd(), '../shared/corpora');
+const names = readdirSync(join(corpora, 'gum/const')).filter((n) => n.endsWith('.ptb')).map((n) => n.slice(0, -4)).sort();
+const settings = {
+  heads: loadHeadTable(process.argv[2] ?? 'en-content'),
+  labels: process.argv[3] ? loadLabelTable(process.argv[3]) : undefined,
+  traces: 'surface' as const,
+  coordination: 'first' as const,
+  punctuation: 'phrase' as const,
+};
+async function* trees() {
+  for (const name of names) yield* readBracketedFile(join(corpora, 'gum/const', `${name}.ptb`), {}, () => undefined);
+}
+async function* gold() {
+  for (const name of names) yield* readConlluFile(join(corpora, 'gum/dep', `${name}.conllu`), {}, () => undefined);
+}
+const result = await scoreConversion(trees(), gold(), settings, (d) => console.error(d.message));
+console.log(`UAS ${result.scorer.uas.toFixed(4)} LAS ${result.scorer.las.toFixed(4)} oracle UAS ${result.oracle.uas.toFixed(4)} LAS ${result.oracle.las.toFixed(4)} skipped ${result.skipped} words ${result.scorer.score.words}`);
+const counts = new Map<string, number>();
+for (const e of result.errors) counts.set(`${e.parent} ${e.goldRelation} line ${e.stepLine}`, (counts.get(`${e.parent} ${e.goldRelation} line ${e.stepLine}`) ?? 0) + 1);
+for (const [key, n] of [...counts].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(String(n).padStart(6), key);

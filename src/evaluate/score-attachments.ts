@@ -1,0 +1,76 @@
+import type { DependencySentence, DependencyWord } from '../model/dependency.js';
+
+/** Attachment scores of predicted sentences against gold ones. */
+export interface AttachmentScore {
+  /** Sentence pairs scored. */
+  sentences: number;
+  /** Sentence pairs left out because their words do not line up (reported by the caller). */
+  misaligned: number;
+  /** Words scored (punctuation left out unless asked). */
+  words: number;
+  /** Words with the gold head. */
+  headsRight: number;
+  /** Words with the gold head and the gold relation (universal part, before any colon). */
+  labelsRight: number;
+}
+
+/**
+ * Forms are the same when equal once the bracket tokens of bracketed corpora
+ * (`-LRB-`, `-RSB-` …, also inside words) are read as brackets; the kind of
+ * bracket is not compared, as corpora write round ones for all kinds.
+ */
+function sameForm(a: string, b: string): boolean {
+  const plain = (form: string) =>
+    form.replace(/-L[RSC]B-/g, '(').replace(/-R[RSC]B-/g, ')').replace(/[[{]/g, '(').replace(/[\]}]/g, ')');
+  return a === b || plain(a) === plain(b);
+}
+
+/** A relation's universal part: `obl:tmod` → `obl`. */
+export function universalPart(relation: string): string {
+  const colon = relation.indexOf(':');
+  return colon === -1 ? relation : relation.slice(0, colon);
+}
+
+/** Gold punctuation: relation `punct` or UPOS PUNCT. */
+export function isPunctuation(word: DependencyWord): boolean {
+  return universalPart(word.deprel) === 'punct' || word.upos === 'PUNCT';
+}
+
+/**
+ * Adds up attachment scores sentence pair by sentence pair. Words line up by
+ * position among the syntactic words (multiword-token lines and empty nodes
+ * left out); a pair whose words differ in number or form does not line up.
+ */
+export class AttachmentScorer {
+  readonly score: AttachmentScore = { sentences: 0, misaligned: 0, words: 0, headsRight: 0, labelsRight: 0 };
+
+  constructor(private readonly withPunctuation = false) {}
+
+  /** Scores one pair; returns false (and counts it) when the words do not line up. */
+  add(predicted: DependencySentence, gold: DependencySentence): boolean {
+    const p = predicted.lines.filter((l): l is DependencyWord => l.type === 'word');
+    const g = gold.lines.filter((l): l is DependencyWord => l.type === 'word');
+    if (p.length !== g.length || p.some((word, i) => !sameForm(word.form, g[i]!.form))) {
+      this.score.misaligned++;
+      return false;
+    }
+    this.score.sentences++;
+    g.forEach((goldWord, i) => {
+      if (!this.withPunctuation && isPunctuation(goldWord)) return;
+      const word = p[i]!;
+      this.score.words++;
+      if (word.head !== goldWord.head) return;
+      this.score.headsRight++;
+      if (universalPart(word.deprel) === universalPart(goldWord.deprel)) this.score.labelsRight++;
+    });
+    return true;
+  }
+
+  get uas(): number {
+    return this.score.words === 0 ? 0 : this.score.headsRight / this.score.words;
+  }
+
+  get las(): number {
+    return this.score.words === 0 ? 0 : this.score.labelsRight / this.score.words;
+  }
+}
