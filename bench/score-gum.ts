@@ -26,5 +26,13 @@ async function* gold() {
 const result = await scoreConversion(trees(), gold(), settings, (d) => console.error(d.message));
 console.log(`UAS ${result.scorer.uas.toFixed(4)} LAS ${result.scorer.las.toFixed(4)} oracle UAS ${result.oracle.uas.toFixed(4)} LAS ${result.oracle.las.toFixed(4)} skipped ${result.skipped} words ${result.scorer.score.words}`);
 const counts = new Map<string, number>();
-for (const e of result.errors) counts.set(`${e.parent} ${e.goldRelation} line ${e.stepLine}`, (counts.get(`${e.parent} ${e.goldRelation} line ${e.stepLine}`) ?? 0) + 1);
+const fixable = result.errors.filter((e) => e.oracleRight);
+console.log(`errors ${result.errors.length}, of which the oracle gets right ${fixable.length}`);
+for (const e of fixable) counts.set(`${e.parent} ${e.goldRelation} line ${e.stepLine}`, (counts.get(`${e.parent} ${e.goldRelation} line ${e.stepLine}`) ?? 0) + 1);
 for (const [key, n] of [...counts].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(String(n).padStart(6), key);
+const show = process.env.SHOW;
+if (show) {
+  for (const e of fixable.filter((e) => `${e.parent} ${e.goldRelation} line ${e.stepLine}` === show).slice(0, 8)) {
+    console.log(`${e.sentence} word ${e.word} "${e.form}" head ${e.head} gold ${e.goldHead}`);
+  }
+}

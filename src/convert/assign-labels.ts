@@ -1,4 +1,4 @@
-import type { LabelContext, LabelTable } from '../tables/table-model.js';
+import type { HeadTable, LabelContext, LabelTable } from '../tables/table-model.js';
 import type { Attachment } from './attach-dependents.js';
 import { candidateOf } from './find-heads.js';
 
@@ -8,7 +8,7 @@ import { candidateOf } from './find-heads.js';
  * `otherwise`); without one, `conj` and `cc` in coordinations, else the first
  * function tag of the dependent's phrase (lower-cased letters), else `dep`.
  */
-export function assignLabels(attachments: Attachment[], table: LabelTable | undefined): string[] {
+export function assignLabels(attachments: Attachment[], table: LabelTable | undefined, heads: HeadTable): string[] {
   return attachments.map((attachment) => {
     if (!attachment.governor || !attachment.parent || !attachment.headNode) return 'root';
     if (!table) return untabled(attachment);
@@ -19,7 +19,7 @@ export function assignLabels(attachments: Attachment[], table: LabelTable | unde
       parent: candidateOf(attachment.parent),
       word: { pos: word.pos, form: word.form, lemma: word.lemma },
       side: word.index < attachment.governor.index ? 'left' : 'right',
-      role: attachment.role,
+      role: attachment.role === 'other' && heads.punctuation(candidateOf(word)) ? 'punctuation' : attachment.role,
     };
     for (const rule of table.rules) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
     return table.otherwise;

@@ -41,7 +41,7 @@ export function attachDependents(
     const headIndex = phrase.head?.child ?? 0;
     const plan =
       phrase.coordination && style !== 'table'
-        ? coordinationAttachments(children.length, phrase.coordination, style)
+        ? coordinationAttachments(children.length, phrase.coordination, style, headIndex)
         : children.map((_, i) => ({ to: headIndex, role: 'other' as const }));
     children.forEach((child, i) => {
       if (i !== headIndex) {

@@ -41,7 +41,7 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   const { root, words } = prepared;
   findHeads(root, settings.heads, settings.coordination, settings.oracle ? oracleChooser(settings.oracle) : undefined);
   const attachments = attachDependents(root, words, settings.heads, settings.coordination, settings.punctuation);
-  const relations = assignLabels(attachments, settings.labels);
+  const relations = assignLabels(attachments, settings.labels, settings.heads);
   const lines: DependencyWord[] = words.map((word, i) => ({
     type: 'word',
     id: String(word.index),

@@ -37,6 +37,11 @@ export function findHeads(
   const coordination = findCoordination(root, root.children.map(candidateOf), table);
   if (!coordination) return;
   root.coordination = coordination;
+  // A head outside the conjuncts means the coordination is among its dependents: the head stays.
+  const tableHead = root.head.child;
+  const low = coordination.conjuncts[0]!;
+  const high = coordination.conjuncts[coordination.conjuncts.length - 1]!;
+  if (tableHead < low || tableHead > high) return;
   const child = coordinationHead(coordination, style);
   const conjuncts = coordination.conjuncts.map((i) => i + 1).join(', ');
   root.head = { child, reason: `coordination, ${style} style: conjuncts are children ${conjuncts}` };
@@ -58,8 +63,9 @@ function searchBlock(block: HeadBlock, candidates: Candidate[], table: HeadTable
   const n = candidates.length;
   const blockName = block.categories.join(' ');
   for (const step of block.steps) {
+    if (step.guards.length > 0 && !candidates.some((c) => step.guards.some((guard) => guard(c)))) continue;
     const order = step.end === 'left' ? [...Array(n).keys()] : [...Array(n).keys()].reverse();
-    const reason = `${blockName} (line ${step.line}): ${step.end} ${step.mode}${step.written.length ? ' ' + step.written.join(' ') : ''}`;
+    const reason = `${blockName} (line ${step.line}): ${step.end} ${step.mode}${step.written.length ? ' ' + step.written.join(' ') : ''}${step.guards.length ? ' (if a child matches)' : ''}`;
     if (step.mode === 'first') return { child: firstContent(candidates, table, step.end), reason, line: step.line };
     if (step.mode === 'only') {
       const i = order[0]!;

@@ -81,12 +81,22 @@ export function coordinationAttachments(
   childCount: number,
   coordination: Coordination,
   style: Exclude<CoordinationStyle, 'table'>,
+  phraseHead: number = coordinationHead(coordination, style),
 ): Array<{ to: number; role: 'conjunct' | 'coordinator' | 'other' }> {
-  const head = coordinationHead(coordination, style);
+  // When the phrase's head is not a conjunct, the coordination is among its
+  // dependents (`museum and gallery practice`): the coordination's own head
+  // hangs from the phrase's head, and the rest from it as usual.
+  const groupHead = coordinationHead(coordination, style);
+  const inside = (i: number) => i >= coordination.conjuncts[0]! && i <= coordination.conjuncts[coordination.conjuncts.length - 1]!;
+  const head = groupHead;
   const { conjuncts, coordinators, separators } = coordination;
   const nextConjunct = (i: number) => conjuncts.find((c) => c > i) ?? head;
   return Array.from({ length: childCount }, (_, i) => {
     const role = conjuncts.includes(i) ? 'conjunct' : coordinators.includes(i) ? 'coordinator' : 'other';
+    if (phraseHead !== groupHead) {
+      if (i === phraseHead) return { to: i, role: 'other' as const };
+      if (i === groupHead || !inside(i)) return { to: phraseHead, role: i === groupHead ? ('other' as const) : role };
+    }
     if (i === head) return { to: i, role };
     if (style === 'first' && (coordinators.includes(i) || separators.includes(i))) return { to: nextConjunct(i), role };
     return { to: head, role };

@@ -14,6 +14,13 @@ export interface AttachmentError {
   goldRelation: string;
   /** The table line of the step that chose the wrong head, when a step did. */
   stepLine: number | undefined;
+  /** The word, its head as converted and its gold head (positions). */
+  word: number;
+  form: string;
+  head: number;
+  goldHead: number;
+  /** Whether the oracle attached this word right: if so, a better head table could too. */
+  oracleRight: boolean;
 }
 
 /** Scores of a conversion against gold dependencies, with the oracle's beside them. */
@@ -63,9 +70,20 @@ export async function scoreConversion(
     conversion.sentence.lines.forEach((line, i) => {
       const goldWord = goldWords[i]!;
       if (isPunctuation(goldWord) || line.head === goldWord.head) return;
+      const oracleRight = oracleConversion?.sentence.lines[i]?.head === goldWord.head;
       const word = conversion.words[i]!;
       const parent = findParent(conversion.root, word.index);
-      errors.push({ sentence: id, parent: parent?.category ?? 'ROOT', goldRelation: universalPart(goldWord.deprel), stepLine: parent?.head?.line });
+      errors.push({
+        sentence: id,
+        parent: parent?.category ?? 'ROOT',
+        goldRelation: universalPart(goldWord.deprel),
+        stepLine: parent?.head?.line,
+        word: word.index,
+        form: word.form,
+        head: Number(line.head),
+        goldHead: Number(goldWord.head),
+        oracleRight,
+      });
     });
   }
   return { scorer, oracle, errors, skipped };

@@ -84,7 +84,7 @@ class TableLoader {
       kind: 'heads',
       name: nameOrPath,
       blocks: new Map(),
-      fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], written: [], file: 'built in', line: 0 }] },
+      fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], guards: [], written: [], file: 'built in', line: 0 }] },
       punctuation: () => false,
       coordinators: () => false,
       coordinationRule: undefined,
@@ -222,8 +222,15 @@ class TableLoader {
   }
 
   private step(statement: StatementSyntax): HeadStep | undefined {
-    const [how, ...patternWords] = statement.words;
+    const [how, ...rest] = statement.words;
     const mode = how!.text;
+    const ifAt = rest.findIndex((w) => w.text === 'if');
+    const patternWords = ifAt === -1 ? rest : rest.slice(0, ifAt);
+    const guardWords = ifAt === -1 ? [] : rest.slice(ifAt + 1);
+    if (ifAt !== -1 && guardWords.length === 0) {
+      this.problem('table-invalid', rest[ifAt]!, '"if" needs at least one pattern after it');
+      return undefined;
+    }
     if (mode !== 'each' && mode !== 'any' && mode !== 'only' && mode !== 'first') {
       this.problem('table-invalid', how!, `"${mode}" is not a way to look: each, any, only or first`);
       return undefined;
@@ -237,11 +244,13 @@ class TableLoader {
       return undefined;
     }
     const patterns = patternWords.map((w) => this.pattern(w));
-    if (patterns.some((p) => p === undefined)) return undefined;
+    const guards = guardWords.map((w) => this.pattern(w));
+    if (patterns.some((p) => p === undefined) || guards.some((g) => g === undefined)) return undefined;
     return {
       end: statement.keyword as 'left' | 'right',
       mode,
       patterns: patterns as Matcher[],
+      guards: guards as Matcher[],
       written: patternWords.map((w) => w.text),
       file: this.file,
       line: statement.line,
@@ -295,7 +304,7 @@ class TableLoader {
       return (context) => matcher(context[key]);
     }
     if (key === 'side' || key === 'role') {
-      const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'other'];
+      const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'punctuation', 'other'];
       const wrong = values.find((value) => !allowed.includes(value));
       if (wrong) this.problem('table-invalid', w, `${key} is ${allowed.join(' or ')}, not "${wrong}"`);
       return (context) => values.includes(context[key]);

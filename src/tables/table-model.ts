@@ -11,6 +11,8 @@ export interface HeadStep {
    */
   mode: 'each' | 'any' | 'only' | 'first';
   patterns: Matcher[];
+  /** The step applies only when some child matches one of these (`if` patterns); empty: always. */
+  guards: Matcher[];
   /** The patterns as written, for explanations. */
   written: string[];
   /** Where the step stands: file and 1-based line. */
@@ -58,8 +60,8 @@ export interface LabelContext {
   word: { pos: string; form: string; lemma: string | undefined };
   /** Where the dependent stands from its head. */
   side: 'left' | 'right';
-  /** Its part in a coordination: a further conjunct, a coordinator, or neither. */
-  role: 'conjunct' | 'coordinator' | 'other';
+  /** Its part: a further conjunct or a coordinator in a coordination, punctuation (by the head table), or other. */
+  role: 'conjunct' | 'coordinator' | 'punctuation' | 'other';
 }
 
 export interface LabelRule {
