@@ -30,6 +30,7 @@ const fixable = result.errors.filter((e) => e.oracleRight);
 console.log(`errors ${result.errors.length}, of which the oracle gets right ${fixable.length}`);
 for (const e of fixable) counts.set(`${e.parent} ${e.goldRelation} line ${e.stepLine}`, (counts.get(`${e.parent} ${e.goldRelation} line ${e.stepLine}`) ?? 0) + 1);
 for (const [key, n] of [...counts].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(String(n).padStart(6), key);
+if (process.env.LABELS) for (const [key, n] of [...result.scorer.confusions].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(String(n).padStart(6), key);
 const show = process.env.SHOW;
 if (show) {
   for (const e of fixable.filter((e) => `${e.parent} ${e.goldRelation} line ${e.stepLine}` === show).slice(0, 8)) {

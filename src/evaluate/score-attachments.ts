@@ -43,6 +43,8 @@ export function isPunctuation(word: DependencyWord): boolean {
  */
 export class AttachmentScorer {
   readonly score: AttachmentScore = { sentences: 0, misaligned: 0, words: 0, headsRight: 0, labelsRight: 0 };
+  /** Words with the right head and the wrong relation, by `gold → ours` (universal parts). */
+  readonly confusions = new Map<string, number>();
 
   constructor(private readonly withPunctuation = false) {}
 
@@ -62,6 +64,10 @@ export class AttachmentScorer {
       if (word.head !== goldWord.head) return;
       this.score.headsRight++;
       if (universalPart(word.deprel) === universalPart(goldWord.deprel)) this.score.labelsRight++;
+      else {
+        const key = `${universalPart(goldWord.deprel)} → ${universalPart(word.deprel)}`;
+        this.confusions.set(key, (this.confusions.get(key) ?? 0) + 1);
+      }
     });
     return true;
   }
