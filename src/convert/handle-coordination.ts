@@ -90,7 +90,13 @@ export function coordinationAttachments(
   const inside = (i: number) => i >= coordination.conjuncts[0]! && i <= coordination.conjuncts[coordination.conjuncts.length - 1]!;
   const head = groupHead;
   const { conjuncts, coordinators, separators } = coordination;
-  const nextConjunct = (i: number) => conjuncts.find((c) => c > i) ?? head;
+  // A coordinator or separator hangs from the conjunct right after it; when other words come between, from the head (no crossing).
+  const attachable = (i: number) => !separators.includes(i) && !coordinators.includes(i);
+  const nextConjunct = (i: number) => {
+    let next = i + 1;
+    while (next < childCount && !attachable(next)) next++;
+    return conjuncts.includes(next) ? next : head;
+  };
   return Array.from({ length: childCount }, (_, i) => {
     const role = conjuncts.includes(i) ? 'conjunct' : coordinators.includes(i) ? 'coordinator' : 'other';
     if (phraseHead !== groupHead) {
