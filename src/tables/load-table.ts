@@ -91,6 +91,8 @@ class TableLoader {
     };
     let block: HeadBlock | undefined;
     const file = this.file;
+    // Blocks with no step line at all, by where their head statement stands.
+    const stepless = new Map<HeadBlock, StatementSyntax>();
     for (const statement of statements) {
       const words = statement.words;
       switch (statement.keyword) {
@@ -113,6 +115,7 @@ class TableLoader {
           break;
         case 'head':
           block = { categories: words.map((w) => w.text), steps: [] };
+          stepless.set(block, statement);
           for (const category of block.categories) {
             if (category === '*') table.fallback = block;
             else table.blocks.set(category, block);
@@ -124,6 +127,7 @@ class TableLoader {
             this.problem('table-invalid', statement, 'a step outside any block; start a block with "head CATEGORY"');
             break;
           }
+          stepless.delete(block);
           const step = this.step(statement);
           if (step) block.steps.push(step);
           break;
@@ -132,9 +136,7 @@ class TableLoader {
           this.problem('table-invalid', statement, `"${statement.keyword}" does not belong in a head table`);
       }
     }
-    for (const [category, b] of table.blocks) {
-      if (b.steps.length === 0) this.problem('table-invalid', { line: 1, column: 1 }, `the block for ${category} has no step`);
-    }
+    for (const [b, statement] of stepless) this.problem('table-invalid', statement, `the block for ${b.categories.join(' ')} has no step`);
     this.finish();
     return table;
   }

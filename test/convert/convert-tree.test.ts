@@ -1,0 +1,61 @@
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { headVector } from '../../src/analysis/heads.js';
+import { analyseTree } from '../../src/analysis/structure.js';
+import { convertTree } from '../../src/convert/convert-tree.js';
+import { loadHeadTable } from '../../src/tables/load-table.js';
+import { projectRoot } from '../support/corpora.js';
+import { arcs } from '../support/convert.js';
+import { read } from '../support/read.js';
+
+const harbour = read(readFileSync(join(projectRoot, 'demo-data/harbour.psd'), 'utf8')).trees;
+const tree = (id: string) => harbour.find((t) => t.id === id)!;
+const settings = (traces: 'surface' | 'restore') => ({ heads: loadHeadTable('en-content'), traces, coordination: 'first' as const, punctuation: 'phrase' as const });
+
+describe('converting a tree', () => {
+  it('makes words of the words only: empty elements never become words', () => {
+    const result = convertTree(tree('harbour.3'), settings('surface'), 'x', 'x')!;
+    expect(result.sentence.lines.map((l) => l.form).join(' ')).toBe('The old crates , the keeper stacked by the wall .');
+  });
+
+  it('restores an extraposed clause to where its *ICH* trace stands, making its arc non-projective', () => {
+    const surface = convertTree(tree('harbour.4'), settings('surface'), 'x', 'x')!.sentence;
+    const restored = convertTree(tree('harbour.4'), settings('restore'), 'x', 'x')!.sentence;
+    const head = (s: typeof surface, form: string) => s.lines[Number(s.lines.find((l) => l.form === form)!.head) - 1]?.form;
+    expect(head(surface, 'sail')).toBe('spread');
+    expect(head(restored, 'sail')).toBe('rumour');
+    expect(analyseTree(headVector(surface)!).nonProjectiveArcs).toEqual([]);
+    expect(analyseTree(headVector(restored)!).nonProjectiveArcs.map((a) => [a.head, a.dependent])).toEqual([[2, 9]]);
+  });
+
+  it('restores a topicalised object to its *T* trace in the verb phrase', () => {
+    const restored = arcs('(S (NP-TPC-1 (DT The) (NNS nets)) (NP-SBJ (PRP she)) (VP (VBD mended) (NP (-NONE- *T*-1)) (ADVP (RB slowly))))', 'en-content', { traces: 'restore' });
+    expect(restored).toEqual(['The→nets/dep', 'nets→mended/dep', 'she→mended/sbj', 'mended→ROOT/root', 'slowly→mended/dep']);
+  });
+
+  it('drops a phrase whose only content is empty, and heads a phrase whose head child was empty from the rest', () => {
+    expect(arcs('(S (NP-SBJ (-NONE- *PRO*)) (VP (VB sail) (ADVP (RB north))))', 'en-content')).toEqual(['sail→ROOT/root', 'north→sail/dep']);
+    expect(arcs('(VP (VB *?*) (NP (NN coffee)))', 'en-function')).toEqual(['coffee→ROOT/root']);
+  });
+
+  it.each([
+    ['first', ['Gulls→circled/sbj', 'and→terns/cc', 'terns→Gulls/conj', 'circled→ROOT/root']],
+    ['last', ['Gulls→terns/conj', 'and→terns/cc', 'terns→circled/sbj', 'circled→ROOT/root']],
+    ['conjunction', ['Gulls→and/conj', 'and→circled/sbj', 'terns→and/conj', 'circled→ROOT/root']],
+  ] as const)('draws coordination with the %s conjunct heading', (style, expected) => {
+    expect(arcs('(S (NP-SBJ (NNS Gulls) (CC and) (NNS terns)) (VP (VBD circled)))', 'en-content', { coordination: style })).toEqual(expected);
+  });
+
+  it('attaches punctuation to the root on request', () => {
+    expect(arcs('(S (NP-SBJ (NN Fog)) (VP (VBD lifted) (PP (IN at) (NP (NN noon) (, ,) (NN luckily)))) (. .))', 'en-content', { punctuation: 'root' })).toContain(',→lifted/dep');
+  });
+
+  it('labels with a label table, and without one from function tags', () => {
+    const text = '(S (NP-SBJ (DT The) (NN ferry)) (VP (VBD left) (NP (DT the) (NN harbour))) (. .))';
+    expect(arcs(text, 'en-content', { labelTable: 'en-ud' })).toEqual([
+      'The→ferry/det', 'ferry→left/nsubj', 'left→ROOT/root', 'the→harbour/det', 'harbour→left/obj', '.→left/punct',
+    ]);
+    expect(arcs(text, 'en-content')).toEqual(['The→ferry/dep', 'ferry→left/sbj', 'left→ROOT/root', 'the→harbour/dep', 'harbour→left/dep', '.→left/dep']);
+  });
+});

@@ -1,0 +1,87 @@
+import { describe, expect, it } from 'vitest';
+import { compileHeadTable, compileLabelTable, loadHeadTable, loadLabelTable, TableError } from '../../src/tables/load-table.js';
+
+function problems(compile: () => unknown): string[] {
+  try {
+    compile();
+  } catch (error) {
+    if (error instanceof TableError) return error.diagnostics.map((d) => `${d.code}@${d.line}:${d.column}: ${d.message}`);
+    throw error;
+  }
+  return [];
+}
+
+describe('the table language', () => {
+  it('reads blocks of steps with patterns, wildcards, function tags, head-word tests and guards', () => {
+    const table = compileHeadTable(
+      ['table test', '# the verb phrase', 'head VP', '  left each VP *-PRD', '  left any S if VB*[form=is,was]', '  left any VB* MD', 'head *', '  right first'].join('\n'),
+    );
+    expect(table.name).toBe('test');
+    expect(table.blocks.get('VP')!.steps.map((s) => [s.end, s.mode, s.written, s.guards.length])).toEqual([
+      ['left', 'each', ['VP', '*-PRD'], 0],
+      ['left', 'any', ['S'], 1],
+      ['left', 'any', ['VB*', 'MD'], 0],
+    ]);
+    expect(table.fallback.steps[0]).toMatchObject({ end: 'right', mode: 'first' });
+  });
+
+  it('reports a line that is not a statement with its line and column', () => {
+    expect(problems(() => compileHeadTable('table t\nhead NP\n  Left any NN\n'))).toEqual([
+      expect.stringMatching(/^table-syntax@3:3: /),
+    ]);
+  });
+
+  it('reports statements that parse but make no sense, each at its word', () => {
+    expect(problems(() => compileHeadTable('table t\nhead NP\n  left some NN\n  right first NN\n  left any\n  left each NN[colour=red]\n'))).toEqual([
+      'table-invalid@3:8: "some" is not a way to look: each, any, only or first',
+      'table-invalid@4:15: "first" takes no patterns',
+      'table-invalid@5:8: "any" needs at least one pattern',
+      'table-invalid@6:13: "colour" is not a test of a head word: pos, form or lemma',
+    ]);
+  });
+
+  it('checks the shape of each statement with its schema', () => {
+    expect(problems(() => compileHeadTable('table two names\ncoordination-rule other\n'))).toEqual([
+      expect.stringMatching(/^table-invalid@1:1: table: /),
+      expect.stringMatching(/^table-invalid@2:19: coordination-rule: /),
+    ]);
+  });
+
+  it('reports a step outside a block and a table it cannot build on', () => {
+    expect(problems(() => compileHeadTable('builds-on no-such-table\nleft first\n'))).toEqual([
+      expect.stringMatching(/^table-not-found@1:11: cannot build on "no-such-table"/),
+      'table-invalid@2:1: a step outside any block; start a block with "head CATEGORY"',
+    ]);
+  });
+
+  it('builds on another table, replacing only the blocks it gives', () => {
+    const table = compileHeadTable('table mine\nbuilds-on en-function\nhead PP\n  left each NP\n');
+    expect(table.blocks.get('PP')!.steps[0]!.written).toEqual(['NP']);
+    expect(table.blocks.get('VP')!.steps[0]!.written[0]).toBe('TO');
+    expect(table.coordinationRule).toBe('collins');
+  });
+
+  it('reads label rules with conditions, and checks their keys and values', () => {
+    const table = compileLabelTable('table l\nlabel nsubj dependent=*-SBJ side=left\notherwise dep\n');
+    expect(table.rules.map((r) => [r.relation, r.conditions.map((c) => c.key)])).toEqual([['nsubj', ['dependent', 'side']]]);
+    expect(problems(() => compileLabelTable('label Subject dependent=NP\nlabel obj colour=red\nlabel obj side=up\n'))).toEqual([
+      'table-invalid@1:7: "Subject" is not a relation such as nsubj or obl:tmod',
+      'table-invalid@2:11: "colour" is not a condition: dependent, head, parent, pos, form, lemma, side, role',
+      'table-invalid@3:11: side is left or right, not "up"',
+    ]);
+  });
+
+  it('loads every shipped table, and documents each block with a comment', async () => {
+    const { readdirSync, readFileSync } = await import('node:fs');
+    const { headrulesFolder } = await import('../../src/tables/load-table.js');
+    for (const name of readdirSync(headrulesFolder())) {
+      if (name.endsWith('.heads')) loadHeadTable(name.replace(/\.heads$/, ''));
+      if (name.endsWith('.labels')) loadLabelTable(name.replace(/\.labels$/, ''));
+      if (!name.endsWith('.heads')) continue;
+      const lines = readFileSync(`${headrulesFolder()}/${name}`, 'utf8').split('\n');
+      lines.forEach((line, i) => {
+        if (line.startsWith('head ')) expect(lines[i - 1], `${name}:${i + 1}`).toMatch(/^#/);
+      });
+    }
+  });
+});
