@@ -2,6 +2,7 @@ import { Command, CommanderError } from 'commander';
 import { registerRewrite } from './commands/rewrite.js';
 import { registerStats } from './commands/stats.js';
 import { registerToDeps } from './commands/to-deps.js';
+import { registerHeads } from './commands/heads.js';
 import { registerValidate } from './commands/validate.js';
 import { ExitCode, type CommandResult } from './exit-codes.js';
 import { describeError, OutputError, type CliIO } from './io.js';
@@ -27,6 +28,7 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
   registerRewrite(program, io, done);
   registerStats(program, io, done);
   registerToDeps(program, io, done);
+  registerHeads(program, io, done);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({
       writeOut: (text) => io.stdout.write(text),

@@ -37,3 +37,10 @@ export function nltkOutlines(files: string[]): string[] {
   const out = execFileSync(python, [script, 'dump', ...files], { encoding: 'utf8', maxBuffer: 1 << 30 });
   return out.split('\n').filter((line) => line.length > 0);
 }
+
+/** Heads of every sentence of CoNLL-U files as NLTK's DependencyGraph reads them, one JSON array per sentence. */
+export function nltkHeads(files: string[]): string[] {
+  const script = join(projectRoot, 'test/support/nltk-trees.py');
+  const out = execFileSync(python, [script, 'deps', ...files], { encoding: 'utf8', maxBuffer: 1 << 30 });
+  return out.split('\n').filter((line) => line.length > 0);
+}

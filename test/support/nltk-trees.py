@@ -4,6 +4,8 @@ library nobody here wrote: its s-expression block reader
 
   nltk-trees.py dump FILE...   one JSON line per tree: [labels in pre-order, leaves in order]
   nltk-trees.py time FILE...   one JSON object: trees, leaves, seconds spent reading, peak memory
+  nltk-trees.py deps FILE...   CoNLL-U read by nltk.parse.DependencyGraph: one JSON line per sentence,
+                               the head of each word in order
 """
 import json
 import resource
@@ -52,8 +54,20 @@ def main(mode, paths):
         seconds = time.perf_counter() - started
         peak = resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024
         print(json.dumps({'trees': trees, 'words': leaves, 'seconds': seconds, 'peakMB': peak}))
+    elif mode == 'deps':
+        from nltk.parse import DependencyGraph
+        for path in paths:
+            with open(path, encoding='utf-8') as stream:
+                blocks = stream.read().split('\n\n')
+            for block in blocks:
+                lines = [line for line in block.split('\n') if line and not line.startswith('#')]
+                if not lines:
+                    continue
+                graph = DependencyGraph('\n'.join(lines), cell_separator='\t', top_relation_label='root')
+                heads = [graph.nodes[i]['head'] for i in range(1, len(lines) + 1)]
+                sys.stdout.write(json.dumps(heads, separators=(',', ':')) + '\n')
     else:
-        sys.exit('usage: nltk-trees.py dump|time FILE...')
+        sys.exit('usage: nltk-trees.py dump|time|deps FILE...')
 
 
 main(sys.argv[1], sys.argv[2:])
