@@ -25,6 +25,16 @@ describe('treebridge stats', () => {
     expect(stdout).toMatch(/non-projective sentences\s+1 \(100\.00%\)/);
   });
 
+  it('converts bracketed input first with --heads, and asks for a head table without it', async () => {
+    const demo = join(projectRoot, 'demo-data/harbour.psd');
+    const surface = JSON.parse((await cli(['stats', '--json', '--heads', 'en-content', demo])).stdout);
+    const restored = JSON.parse((await cli(['stats', '--json', '--heads', 'en-content', '--traces', 'restore', demo])).stdout);
+    expect([surface.sentences, surface.words, surface.nonProjectiveSentences]).toEqual([25, 216, 0]);
+    expect(restored.nonProjectiveSentences).toBeGreaterThan(0);
+    const without = await cli(['stats', demo]);
+    expect([without.code, without.stderr]).toEqual([2, 'treebridge: bracketed input needs a head table to convert it first: --heads NAME\n']);
+  });
+
   it('reports a sentence that is not a tree on standard error, leaves it out and exits 1', async () => {
     const text = '# sent_id = x1\n# text = a b\n1\ta\ta\tX\t_\t_\t2\tdep\t_\t_\n2\tb\tb\tX\t_\t_\t1\tdep\t_\t_\n\n';
     const { code, stdout, stderr } = await cli(['stats', '--json', '--from', 'conllu', '-'], { stdin: text });

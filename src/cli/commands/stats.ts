@@ -8,27 +8,59 @@ import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import { checkDependencyTree } from '../../validate/check-dependency-tree.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
-import { openInputs, Output, type CliIO } from '../io.js';
-import { readSentencesOf } from '../read-trees.js';
+import { openInputs, Output, type CliIO, type Input } from '../io.js';
+import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { convertTree, type ConversionSettings } from '../../convert/convert-tree.js';
+import type { DependencySentence } from '../../model/dependency.js';
+import type { Report } from '../../diagnostics/diagnostic.js';
 
 export function registerStats(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
-  program
+  const command = program
     .command('stats')
     .description('measure the structure of dependency trees: projectivity, gap and edge degree, well-nestedness, arc lengths')
-    .argument('<files...>', 'CoNLL-U files, or - for standard input')
+    .argument('<files...>', 'CoNLL-U files, or bracketed files with --heads (converted first), or - for standard input')
     .addOption(new Option('--from <format>', 'input format (default: by extension)').choices([...inputFormats]))
     .option('--json', 'print the figures as JSON')
     .option('--arcs', 'list each sentence with non-projective arcs, with the gap of each arc')
-    .option('-o, --output <file>', 'write the report to a file (default: standard output)')
-    .action(async (files: string[], options: Record<string, unknown>) => done(await stats(files, options, io)));
+    .option('-o, --output <file>', 'write the report to a file (default: standard output)');
+  addConversionOptions(command, false);
+  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await stats(files, options, io)));
+}
+
+/** Dependency sentences of the inputs: read as CoNLL-U, or converted from bracketed trees. */
+async function* sentencesOf(
+  format: InputFormat,
+  inputs: Input[],
+  options: Record<string, unknown>,
+  settings: ConversionSettings | undefined,
+  report: Report,
+  io: CliIO,
+): AsyncGenerator<DependencySentence> {
+  if (format === 'conllu') {
+    yield* readSentencesOf(inputs, report, io);
+    return;
+  }
+  let number = 0;
+  for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
+    number++;
+    const id = tree.id ?? `${tree.file}-${number}`;
+    const conversion = convertTree(tree, settings!, id, id);
+    if (conversion) yield conversion.sentence;
+  }
 }
 
 async function stats(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   const { inputs, failures } = await openInputs(files, io);
   const format = commonFormat(inputs, options.from as InputFormat | undefined);
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  let settings: ConversionSettings | undefined;
   if (format === 'bracketed') {
-    return { code: ExitCode.UsageOrIO, messages: ['stats reads CoNLL-U; bracketed input needs a head table to convert it first (--heads), which is not available yet'] };
+    if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to convert it first: --heads NAME'] };
+    const loaded = conversionSettings(options);
+    if ('problems' in loaded) return { code: ExitCode.UsageOrIO, messages: loaded.problems };
+    settings = loaded;
   }
   const output = Output.to(options.output as string | undefined, io);
   const counter = new CorpusStructureCounter();
@@ -39,7 +71,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
     io.stderr.write(formatDiagnostic(diagnostic) + '\n');
   };
   try {
-    for await (const sentence of readSentencesOf(inputs, problem, io)) {
+    for await (const sentence of sentencesOf(format, inputs, options, settings, problem, io)) {
       // Only a tree can be measured: a sentence that is not one is reported and left out.
       const before = errors;
       checkDependencyTree(sentence, problem);
