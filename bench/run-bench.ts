@@ -81,6 +81,16 @@ try {
   rmSync(dir, { recursive: true, force: true });
 }
 
+// Conversion: read + convert + write, IcePaHC with penn-historical, beside NLTK's reading time of the same files.
+const convertRuns: Measure[] = [];
+for (let round = 0; round < rounds; round++) {
+  convertRuns.push(JSON.parse(execFileSync(process.execPath, [...nodeFlags, join(here, 'convert-worker.js'), 'penn-historical', ...files], { encoding: 'utf8', maxBuffer: 1 << 24 })));
+}
+const conversion = fastest(convertRuns) as Measure & { words: number };
+console.log(`\nconversion of IcePaHC to CoNLL-U with penn-historical (read + convert + write; fastest of ${rounds}):`);
+console.log(row('treebridge to-deps', megabytes, conversion) + `   (${Math.round(conversion.words / conversion.seconds).toLocaleString('en-US')} words/s)`);
+console.log(`conversion takes ${(conversion.seconds / reference.seconds).toFixed(2)}x the time NLTK takes only to read the same files (target: under 1)`);
+
 // stats: structure analysis of every shared CoNLL-U file (GUM dep CC BY 4.0; UD EWT and CAC dev CC BY-SA 4.0).
 const conllu = ['gum/dep', 'ud'].flatMap((sub) =>
   readdirSync(join(corpora, sub)).filter((name) => name.endsWith('.conllu')).sort().map((name) => join(corpora, sub, name)),
