@@ -32,6 +32,8 @@ export interface PhraseNode {
   children: ConversionNode[];
   /** Filled by find-heads: which child heads the phrase, and why. */
   head?: HeadChoice;
+  /** Filled by find-heads: the word its heads lead down to. */
+  headWord?: WordNode;
   /** Filled by find-heads when the phrase is a coordination drawn in a style. */
   coordination?: import('./handle-coordination.js').Coordination;
   /** The bracket it was read from; absent for the sentence-level group of several top nodes. */
@@ -42,8 +44,8 @@ export interface PhraseNode {
 export interface HeadChoice {
   /** Index of the head child. */
   child: number;
-  /** How it was chosen, for `heads explain`: `VP line 12: left each TO VBD …`. */
-  reason: string;
+  /** How it was chosen, for `heads explain`: `VP (line 12): left each TO VBD … [matched TO]`. */
+  readonly reason: string;
   /** The table line of the step, when a step chose it. */
   line?: number;
 }
@@ -52,7 +54,9 @@ export type ConversionNode = WordNode | PhraseNode;
 
 /** The word a node's heads lead down to. */
 export function headWordOf(node: ConversionNode): WordNode {
-  let current = node;
+  if (node.kind === 'word') return node;
+  if (node.headWord) return node.headWord;
+  let current: ConversionNode = node;
   while (current.kind === 'phrase') current = current.children[current.head?.child ?? 0]!;
   return current;
 }

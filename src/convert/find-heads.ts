@@ -1,5 +1,5 @@
 import type { Candidate } from '../tables/label-pattern.js';
-import type { HeadBlock, HeadTable } from '../tables/table-model.js';
+import type { HeadBlock, HeadStep, HeadTable } from '../tables/table-model.js';
 import { headWordOf, type ConversionNode, type HeadChoice, type PhraseNode } from './conversion-tree.js';
 import { coordinationHead, findCoordination, type CoordinationStyle } from './handle-coordination.js';
 
@@ -24,64 +24,108 @@ export function findHeads(
 ): void {
   if (root.kind !== 'phrase') return;
   for (const child of root.children) findHeads(child, table, style, oracle);
-  const chosen = oracle?.(root);
+  root.head = decideHead(root, table, style, oracle);
+  root.headWord = headWordOf(root.children[root.head.child]!);
+}
+
+function decideHead(
+  phrase: PhraseNode,
+  table: HeadTable,
+  style: CoordinationStyle,
+  oracle: ((phrase: PhraseNode) => number | undefined) | undefined,
+): HeadChoice {
+  const candidates = phrase.children.map(candidateOf);
+  const chosen = oracle?.(phrase);
   if (chosen !== undefined && chosen >= 0) {
     // The oracle knows the head; coordination still attaches coordinators and separators by the style.
-    root.head = { child: chosen, reason: 'oracle: the child holding the gold head' };
-    const coordination = style === 'table' ? undefined : findCoordination(root, root.children.map(candidateOf), table);
-    if (coordination && style !== 'table' && coordinationHead(coordination, style) === chosen) root.coordination = coordination;
-    return;
+    const coordination = style === 'table' ? undefined : findCoordination(phrase, candidates, table);
+    if (coordination && style !== 'table' && coordinationHead(coordination, style) === chosen) phrase.coordination = coordination;
+    return { child: chosen, reason: 'oracle: the child holding the gold head' };
   }
-  root.head = chooseHead(root, table);
-  if (style === 'table') return;
-  const coordination = findCoordination(root, root.children.map(candidateOf), table);
-  if (!coordination) return;
-  root.coordination = coordination;
+  const choice = chooseFrom(candidates, phrase.category, table);
+  if (style === 'table') return choice;
+  const coordination = findCoordination(phrase, candidates, table);
+  if (!coordination) return choice;
+  phrase.coordination = coordination;
   // A head outside the conjuncts means the coordination is among its dependents: the head stays.
-  const tableHead = root.head.child;
   const low = coordination.conjuncts[0]!;
   const high = coordination.conjuncts[coordination.conjuncts.length - 1]!;
-  if (tableHead < low || tableHead > high) return;
+  if (choice.child < low || choice.child > high) return choice;
   const child = coordinationHead(coordination, style);
   const conjuncts = coordination.conjuncts.map((i) => i + 1).join(', ');
-  root.head = { child, reason: `coordination, ${style} style: conjuncts are children ${conjuncts}` };
+  return { child, reason: `coordination, ${style} style: conjuncts are children ${conjuncts}` };
 }
 
 export function chooseHead(phrase: PhraseNode, table: HeadTable): HeadChoice {
-  const candidates = phrase.children.map(candidateOf);
-  const own = table.blocks.get(phrase.category);
-  const blocks = own ? [own, table.fallback] : [table.fallback];
-  for (const block of blocks) {
+  return chooseFrom(phrase.children.map(candidateOf), phrase.category, table);
+}
+
+function chooseFrom(candidates: Candidate[], category: string, table: HeadTable): HeadChoice {
+  const own = table.blocks.get(category);
+  for (const block of own ? [own, table.fallback] : [table.fallback]) {
     const found = searchBlock(block, candidates, table);
     if (found) return adjustForCoordination(found, candidates, table);
   }
-  const index = firstContent(candidates, table, 'left');
-  return { child: index, reason: 'no step chose: first child that is not punctuation' };
+  return { child: firstContent(candidates, table, 'left'), reason: 'no step chose: first child that is not punctuation' };
 }
 
-function searchBlock(block: HeadBlock, candidates: Candidate[], table: HeadTable): HeadChoice | undefined {
+/** A choice by a step, whose reason is put into words only when asked for (explanations are rare, choices are not). */
+class StepChoice implements HeadChoice {
+  readonly line: number;
+
+  constructor(
+    readonly child: number,
+    private readonly block: HeadBlock,
+    private readonly step: HeadStep,
+    private readonly pattern: number | undefined,
+    private readonly then = '',
+  ) {
+    this.line = step.line;
+  }
+
+  get reason(): string {
+    const { block, step, pattern } = this;
+    const written = step.written.length ? ' ' + step.written.join(' ') : '';
+    const guard = step.guards.length ? ' (if a child matches)' : '';
+    const matched = pattern === undefined ? '' : ` [matched ${step.written[pattern]}]`;
+    return `${block.categories.join(' ')} (line ${step.line}): ${step.end} ${step.mode}${written}${guard}${matched}${this.then}`;
+  }
+
+  /** The same step's choice, moved by the coordination rule. */
+  moved(child: number): StepChoice {
+    return new StepChoice(child, this.block, this.step, this.pattern, '; then the coordination rule: the child before the coordinator');
+  }
+}
+
+function chosen(child: number, block: HeadBlock, step: HeadStep, pattern: number | undefined): StepChoice {
+  return new StepChoice(child, block, step, pattern);
+}
+
+function searchBlock(block: HeadBlock, candidates: Candidate[], table: HeadTable): StepChoice | undefined {
   const n = candidates.length;
-  const blockName = block.categories.join(' ');
   for (const step of block.steps) {
     if (step.guards.length > 0 && !candidates.some((c) => step.guards.some((guard) => guard(c)))) continue;
-    const order = step.end === 'left' ? [...Array(n).keys()] : [...Array(n).keys()].reverse();
-    const reason = `${blockName} (line ${step.line}): ${step.end} ${step.mode}${step.written.length ? ' ' + step.written.join(' ') : ''}${step.guards.length ? ' (if a child matches)' : ''}`;
-    if (step.mode === 'first') return { child: firstContent(candidates, table, step.end), reason, line: step.line };
+    const fromLeft = step.end === 'left';
+    if (step.mode === 'first') return chosen(firstContent(candidates, table, step.end), block, step, undefined);
     if (step.mode === 'only') {
-      const i = order[0]!;
+      const i = fromLeft ? 0 : n - 1;
       const p = step.patterns.findIndex((pattern) => pattern(candidates[i]!));
-      if (p !== -1) return { child: i, reason: `${reason} [matched ${step.written[p]}]`, line: step.line };
+      if (p !== -1) return chosen(i, block, step, p);
       continue;
     }
     if (step.mode === 'each') {
       for (let p = 0; p < step.patterns.length; p++) {
         const pattern = step.patterns[p]!;
-        for (const i of order) if (pattern(candidates[i]!)) return { child: i, reason: `${reason} [matched ${step.written[p]}]`, line: step.line };
+        for (let k = 0; k < n; k++) {
+          const i = fromLeft ? k : n - 1 - k;
+          if (pattern(candidates[i]!)) return chosen(i, block, step, p);
+        }
       }
     } else {
-      for (const i of order) {
+      for (let k = 0; k < n; k++) {
+        const i = fromLeft ? k : n - 1 - k;
         const p = step.patterns.findIndex((pattern) => pattern(candidates[i]!));
-        if (p !== -1) return { child: i, reason: `${reason} [matched ${step.written[p]}]`, line: step.line };
+        if (p !== -1) return chosen(i, block, step, p);
       }
     }
   }
@@ -103,11 +147,9 @@ function firstContent(candidates: Candidate[], table: HeadTable, end: 'left' | '
  * head follows a coordinator that is not the first child, the child just
  * before the coordinator heads instead. Only for tables that ask for it.
  */
-function adjustForCoordination(choice: HeadChoice, candidates: Candidate[], table: HeadTable): HeadChoice {
+function adjustForCoordination(choice: StepChoice, candidates: Candidate[], table: HeadTable): HeadChoice {
   if (table.coordinationRule !== 'collins') return choice;
   const before = choice.child - 1;
-  if (before >= 1 && table.coordinators(candidates[before]!)) {
-    return { child: before - 1, reason: `${choice.reason}; then the coordination rule: the child before the coordinator`, line: choice.line };
-  }
+  if (before >= 1 && table.coordinators(candidates[before]!)) return choice.moved(before - 1);
   return choice;
 }

@@ -29,7 +29,9 @@ export function prepareTree(tree: Tree, traces: TraceMode): { root: ConversionNo
   const built = top.map((child) => build(child, words)).filter((node): node is Working => node !== undefined);
   let root: Working;
   if (built.length === 1) root = built[0]!;
-  else root = { kind: 'phrase', category: '', functions: [], label: '', children: built, coindex: undefined };
+  else {
+    root = { kind: 'phrase', category: '', functions: [], label: '', children: built, head: undefined, headWord: undefined, coordination: undefined, source: undefined, coindex: undefined };
+  }
   if (traces === 'restore') restore(root);
   const pruned = prune(root);
   return pruned ? { root: pruned, words } : undefined;
@@ -58,12 +60,16 @@ function build(node: ConstituentNode, words: WordNode[]): Working | undefined {
       return undefined;
     case 'phrase': {
       const children = node.children.map((child) => build(child, words)).filter((c): c is Working => c !== undefined);
+      // Every field find-heads fills is there from the start, so that phrases keep one shape.
       return {
         kind: 'phrase',
         category: node.label.category,
         functions: node.label.functions,
         label: formatLabel(node.label),
         children,
+        head: undefined,
+        headWord: undefined,
+        coordination: undefined,
         source: node,
         coindex: node.label.coindex,
       };
@@ -110,6 +116,15 @@ function prune(node: Working): ConversionNode | undefined {
   if (node.kind === 'trace') return undefined;
   const children = node.children.map(prune).filter((c): c is ConversionNode => c !== undefined);
   if (children.length === 0) return undefined;
-  const { coindex: _coindex, ...phrase } = node;
-  return { ...phrase, children };
+  return {
+    kind: 'phrase',
+    category: node.category,
+    functions: node.functions,
+    label: node.label,
+    children,
+    head: undefined,
+    headWord: undefined,
+    coordination: undefined,
+    source: node.source,
+  };
 }
