@@ -3,6 +3,7 @@
 // words, seconds and peak memory as JSON. Argument 1 is the head table.
 import { closeSync, openSync, writeSync } from 'node:fs';
 import { devNull } from 'node:os';
+import { basename } from 'node:path';
 import { convertTree, type ConversionSettings } from '../src/convert/convert-tree.js';
 import { readBracketedFilesBatches } from '../src/formats/bracketed/read-bracketed.js';
 import { writeSentence } from '../src/formats/conllu/write-conllu.js';
@@ -18,7 +19,7 @@ for await (const batch of readBracketedFilesBatches(files, { splitLemmas: true }
   let text = '';
   for (const tree of batch.trees) {
     trees++;
-    const conversion = convertTree(tree, settings, tree.id ?? String(trees), `${batch.file}#${trees}`);
+    const conversion = convertTree(tree, settings, tree.id ?? String(trees), `${basename(batch.file)}#${trees}`);
     if (!conversion) continue;
     words += conversion.words.length;
     text += writeSentence(conversion.sentence);

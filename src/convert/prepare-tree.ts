@@ -110,21 +110,16 @@ function hasWords(node: Working): boolean {
   return node.kind === 'word' || (node.kind === 'phrase' && node.children.some(hasWords));
 }
 
-/** Drops traces and phrases left without words. */
+/** Drops traces and phrases left without words, in place: the working phrases become the conversion tree's. */
 function prune(node: Working): ConversionNode | undefined {
   if (node.kind === 'word') return node;
   if (node.kind === 'trace') return undefined;
-  const children = node.children.map(prune).filter((c): c is ConversionNode => c !== undefined);
-  if (children.length === 0) return undefined;
-  return {
-    kind: 'phrase',
-    category: node.category,
-    functions: node.functions,
-    label: node.label,
-    children,
-    head: undefined,
-    headWord: undefined,
-    coordination: undefined,
-    source: node.source,
-  };
+  let kept = 0;
+  const children = node.children;
+  for (const child of children) {
+    const pruned = prune(child);
+    if (pruned) children[kept++] = pruned as Working;
+  }
+  children.length = kept;
+  return kept === 0 ? undefined : (node as PhraseNode);
 }

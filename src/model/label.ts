@@ -26,9 +26,12 @@ function isCanonicalNumber(text: string): boolean {
 }
 
 const parsed = new Map<string, Label>();
+const NO_TAGS: readonly string[] = Object.freeze([]);
 
 /** Splits a written label into its parts. `formatLabel(parseLabel(s)) === s` for every label. */
 export function parseLabel(written: string): Label {
+  // Most tags have no hyphen and no equals sign: they are categories as they stand.
+  if (written.indexOf('-') === -1 && written.indexOf('=') === -1) return { category: written, functions: NO_TAGS };
   let label = parsed.get(written);
   if (label === undefined) {
     label = Object.freeze(splitLabel(written));

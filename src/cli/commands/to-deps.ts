@@ -41,7 +41,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
       treeInFile++;
       const file = tree.file ?? '-';
       const id = tree.id ?? `${basename(file)}-${treeInFile}`;
-      const conversion = convertTree(tree, settings, id, `${file}#${treeInFile}`);
+      const conversion = convertTree(tree, settings, id, `${basename(file)}#${treeInFile}`);
       if (!conversion) {
         skipped++;
         if (tree.source && tree.position) {
