@@ -36,6 +36,31 @@ const steps = [
     args: ['validate', 'demo-output/harbour.line.psd'],
     expect: 0,
   },
+  {
+    say: 'The main job: convert the harbour trees to Universal Dependencies, with content heads and UD relations.',
+    args: ['to-deps', '--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb', '-o', 'demo-output/harbour.conllu', 'demo-data/harbour.psd'],
+    expect: 0,
+  },
+  {
+    say: 'The converted file passes the CoNLL-U checks.',
+    args: ['validate', 'demo-output/harbour.conllu'],
+    expect: 0,
+  },
+  {
+    say: 'Why did a phrase get its head? The steps of the table, phrase by phrase, for the fourth tree.',
+    args: ['heads', 'explain', '--heads', 'en-content', '--sentence', '4', 'demo-data/harbour.psd'],
+    expect: 0,
+  },
+  {
+    say: 'Restoring traces puts the extraposed and topicalised phrases where their traces stand: some arcs now cross.',
+    args: ['stats', '--arcs', '--heads', 'en-content', '--traces', 'restore', 'demo-data/harbour.psd'],
+    expect: 0,
+  },
+  {
+    say: 'The historical-style file, with its word-lemma leaves, converted with the Penn-Helsinki table.',
+    args: ['to-deps', '--heads', 'penn-historical', '--lemmas', '-o', 'demo-output/ferry-log.conllu', 'demo-data/ferry-log.psd'],
+    expect: 0,
+  },
 ];
 
 let failed = false;
