@@ -29,6 +29,7 @@ export function assignLabels(attachments: Attachment[], table: LabelTable | unde
 function untabled(attachment: Attachment): string {
   if (attachment.role === 'conjunct') return 'conj';
   if (attachment.role === 'coordinator') return 'cc';
+  if (attachment.role === 'raised') return 'obj';
   const tag = attachment.node.kind === 'phrase' ? attachment.node.functions[0] : undefined;
   const letters = tag?.toLowerCase().replace(/[^a-z]/g, '');
   return letters ? letters : 'dep';

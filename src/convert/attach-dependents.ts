@@ -6,6 +6,29 @@ import { coordinationAttachments, type CoordinationStyle } from './handle-coordi
 /** Where punctuation attaches: as any other dependent in its phrase, or to the root word. */
 export type PunctuationPolicy = 'phrase' | 'root';
 
+/**
+ * Subject raising (head table `raise-subject …`): the subject of a verbless or
+ * non-finite clause under a verb phrase attaches to that verb phrase's head.
+ */
+function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: NonNullable<HeadTable['raising']>): void {
+  const visit = (phrase: PhraseNode) => {
+    for (const child of phrase.children) {
+      if (child.kind !== 'phrase') continue;
+      visit(child);
+      if (!rule.under(candidateOf(phrase)) || !rule.clause(candidateOf(child))) continue;
+      const candidates = child.children.map(candidateOf);
+      if (candidates.some((c) => rule.without(c))) continue;
+      const subjectIndex = candidates.findIndex((c) => rule.subject(c));
+      if (subjectIndex === -1 || subjectIndex === child.head?.child) continue;
+      const subject = child.children[subjectIndex]!;
+      const word = headWordOf(subject);
+      const headNode = phrase.children[phrase.head?.child ?? 0]!;
+      attachments[word.index - 1] = { dependent: word, governor: headWordOf(phrase), node: subject, parent: phrase, headNode, role: 'raised' };
+    }
+  };
+  if (root.kind === 'phrase') visit(root);
+}
+
 /** A word's attachment to its head word, with what the label table looks at. */
 export interface Attachment {
   dependent: WordNode;
@@ -17,7 +40,7 @@ export interface Attachment {
   parent: PhraseNode | null;
   /** The child of `parent` it attaches to. */
   headNode: ConversionNode | null;
-  role: 'conjunct' | 'coordinator' | 'other';
+  role: 'conjunct' | 'coordinator' | 'raised' | 'other';
 }
 
 /**
@@ -53,6 +76,7 @@ export function attachDependents(
     });
   };
   if (root.kind === 'phrase') visit(root);
+  if (table.raising) raiseSubjects(root, attachments, table.raising);
   if (punctuation === 'root') {
     for (const attachment of attachments) {
       if (attachment.governor && attachment.dependent !== top && table.punctuation(candidateOf(attachment.dependent))) {

@@ -31,8 +31,8 @@ export interface Conversion {
 
 /**
  * Converts a bracketed tree into a dependency sentence, pass by pass:
- * prepare-tree, find-heads (coordination included), attach-dependents,
- * assign-labels. `id` becomes `# sent_id`; `origin` names the source tree in
+ * prepare-tree, find-heads (coordination included), attach-dependents
+ * (subject raising included), assign-labels. `id` becomes `# sent_id`; `origin` names the source tree in
  * each word's MISC. Undefined for a tree without words.
  */
 export function convertTree(tree: Tree, settings: ConversionSettings, id: string, origin: string): Conversion | undefined {

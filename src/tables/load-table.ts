@@ -64,6 +64,7 @@ const statementShapes = z.discriminatedUnion('keyword', [
   z.object({ keyword: z.literal('punctuation'), words: z.array(word).min(1, 'name at least one label') }),
   z.object({ keyword: z.literal('coordinators'), words: z.array(word).min(1, 'name at least one label') }),
   z.object({ keyword: z.literal('coordination-rule'), words: z.tuple([word.extend({ text: z.literal('collins') })]) }),
+  z.object({ keyword: z.literal('raise-subject'), words: z.array(word).min(7, 'write raise-subject CATEGORY... under CATEGORY... with PATTERN... without PATTERN...') }),
   z.object({ keyword: z.literal('head'), words: z.array(word).min(1, 'name the parent categories, or * for the default block') }),
   z.object({ keyword: z.enum(['left', 'right']), words: z.array(word).min(1, 'say how: each, any or first') }),
   z.object({ keyword: z.literal('label'), words: z.array(word).min(1, 'name the relation') }),
@@ -88,6 +89,7 @@ class TableLoader {
       punctuation: () => false,
       coordinators: () => false,
       coordinationRule: undefined,
+      raising: undefined,
     };
     let block: HeadBlock | undefined;
     const file = this.file;
@@ -113,6 +115,21 @@ class TableLoader {
         case 'coordination-rule':
           table.coordinationRule = 'collins';
           break;
+        case 'raise-subject': {
+          const at = (word: string) => words.findIndex((w) => w.text === word);
+          const [under, withAt, without] = [at('under'), at('with'), at('without')];
+          if (!(under >= 1 && withAt > under + 1 && without > withAt + 1 && without < words.length - 1)) {
+            this.problem('table-invalid', statement, 'write raise-subject CATEGORY... under CATEGORY... with PATTERN... without PATTERN...');
+            break;
+          }
+          table.raising = {
+            clause: this.anyOf(words.slice(0, under)),
+            under: this.anyOf(words.slice(under + 1, withAt)),
+            subject: this.anyOf(words.slice(withAt + 1, without)),
+            without: this.anyOf(words.slice(without + 1)),
+          };
+          break;
+        }
         case 'head':
           block = { categories: words.map((w) => w.text), steps: [] };
           stepless.set(block, statement);
@@ -306,7 +323,7 @@ class TableLoader {
       return (context) => matcher(context[key]);
     }
     if (key === 'side' || key === 'role') {
-      const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'punctuation', 'other'];
+      const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'punctuation', 'raised', 'other'];
       const wrong = values.find((value) => !allowed.includes(value));
       if (wrong) this.problem('table-invalid', w, `${key} is ${allowed.join(' or ')}, not "${wrong}"`);
       return (context) => values.includes(context[key]);

@@ -40,6 +40,13 @@ export interface HeadTable {
   coordinators: Matcher;
   /** `collins`: a head just after a coordinator that is not the first child gives way to the child before it. */
   coordinationRule: 'collins' | undefined;
+  /**
+   * Subject raising: in a clause matching `clause` under a phrase matching
+   * `under`, with a child matching `subject` and none matching `without` (no
+   * finite verb), the subject attaches to the head of the phrase above (role
+   * `raised`), as Universal Dependencies draws `make it difficult`.
+   */
+  raising: { clause: Matcher; under: Matcher; subject: Matcher; without: Matcher } | undefined;
 }
 
 /** A condition of a label rule, compiled. */
@@ -61,7 +68,7 @@ export interface LabelContext {
   /** Where the dependent stands from its head. */
   side: 'left' | 'right';
   /** Its part: a further conjunct or a coordinator in a coordination, punctuation (by the head table), or other. */
-  role: 'conjunct' | 'coordinator' | 'punctuation' | 'other';
+  role: 'conjunct' | 'coordinator' | 'punctuation' | 'raised' | 'other';
 }
 
 export interface LabelRule {
