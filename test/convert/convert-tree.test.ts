@@ -48,6 +48,14 @@ describe('converting a tree', () => {
     expect(arcs('(S (NP-SBJ (NNS Gulls) (CC and) (NNS terns)) (VP (VBD circled)))', 'en-content', { coordination: style })).toEqual(expected);
   });
 
+  it('raises the subject of a verbless clause under a verb to the verb, as en-content asks (raise-subject)', () => {
+    const text = '(S (NP-SBJ (PRP They)) (VP (VBD made) (S (NP-SBJ (PRP it)) (ADJP-PRD (JJ difficult)))))';
+    expect(arcs(text, 'en-content', { labelTable: 'en-ud' })).toEqual(['They→made/nsubj', 'made→ROOT/root', 'it→made/obj', 'difficult→made/xcomp']);
+    // A finite clause keeps its subject.
+    const finite = '(S (NP-SBJ (PRP They)) (VP (VBD said) (S (NP-SBJ (PRP it)) (VP (VBD worked)))))';
+    expect(arcs(finite, 'en-content', { labelTable: 'en-ud' })).toContain('it→worked/nsubj');
+  });
+
   it('attaches punctuation to the root on request', () => {
     expect(arcs('(S (NP-SBJ (NN Fog)) (VP (VBD lifted) (PP (IN at) (NP (NN noon) (, ,) (NN luckily)))) (. .))', 'en-content', { punctuation: 'root' })).toContain(',→lifted/dep');
   });
