@@ -86,7 +86,7 @@ class StepChoice implements HeadChoice {
   get reason(): string {
     const { block, step, pattern } = this;
     const written = step.written.length ? ' ' + step.written.join(' ') : '';
-    const guard = step.guards.length ? ' (if a child matches)' : '';
+    const guard = (step.guards.length ? ' (if a child matches)' : '') + (step.vetoes.length ? ' (unless a child matches)' : '');
     const matched = pattern === undefined ? '' : ` [matched ${step.written[pattern]}]`;
     return `${block.categories.join(' ')} (line ${step.line}): ${step.end} ${step.mode}${written}${guard}${matched}${this.then}`;
   }
@@ -105,6 +105,7 @@ function searchBlock(block: HeadBlock, candidates: Candidate[], table: HeadTable
   const n = candidates.length;
   for (const step of block.steps) {
     if (step.guards.length > 0 && !candidates.some((c) => step.guards.some((guard) => guard(c)))) continue;
+    if (step.vetoes.length > 0 && candidates.some((c) => step.vetoes.some((veto) => veto(c)))) continue;
     const fromLeft = step.end === 'left';
     if (step.mode === 'first') return chosen(firstContent(candidates, table, step.end), block, step, undefined);
     if (step.mode === 'only') {

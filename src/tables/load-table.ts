@@ -85,7 +85,7 @@ class TableLoader {
       kind: 'heads',
       name: nameOrPath,
       blocks: new Map(),
-      fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], guards: [], written: [], file: 'built in', line: 0 }] },
+      fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], guards: [], vetoes: [], written: [], file: 'built in', line: 0 }] },
       punctuation: () => false,
       coordinators: () => false,
       coordinationRule: undefined,
@@ -243,12 +243,18 @@ class TableLoader {
   private step(statement: StatementSyntax): HeadStep | undefined {
     const [how, ...rest] = statement.words;
     const mode = how!.text;
+    // Patterns, then optionally `if PATTERN...`, then optionally `unless PATTERN...`.
     const ifAt = rest.findIndex((w) => w.text === 'if');
-    const patternWords = ifAt === -1 ? rest : rest.slice(0, ifAt);
-    const guardWords = ifAt === -1 ? [] : rest.slice(ifAt + 1);
-    if (ifAt !== -1 && guardWords.length === 0) {
-      this.problem('table-invalid', rest[ifAt]!, '"if" needs at least one pattern after it');
-      return undefined;
+    const unlessAt = rest.findIndex((w) => w.text === 'unless');
+    const patternsEnd = [ifAt, unlessAt].filter((i) => i !== -1).reduce((a, b) => Math.min(a, b), rest.length);
+    const patternWords = rest.slice(0, patternsEnd);
+    const guardWords = ifAt === -1 ? [] : rest.slice(ifAt + 1, unlessAt > ifAt ? unlessAt : rest.length);
+    const vetoWords = unlessAt === -1 ? [] : rest.slice(unlessAt + 1, ifAt > unlessAt ? ifAt : rest.length);
+    for (const [at, found] of [[ifAt, guardWords], [unlessAt, vetoWords]] as const) {
+      if (at !== -1 && found.length === 0) {
+        this.problem('table-invalid', rest[at]!, `"${rest[at]!.text}" needs at least one pattern after it`);
+        return undefined;
+      }
     }
     if (mode !== 'each' && mode !== 'any' && mode !== 'only' && mode !== 'first') {
       this.problem('table-invalid', how!, `"${mode}" is not a way to look: each, any, only or first`);
@@ -264,12 +270,14 @@ class TableLoader {
     }
     const patterns = patternWords.map((w) => this.pattern(w));
     const guards = guardWords.map((w) => this.pattern(w));
-    if (patterns.some((p) => p === undefined) || guards.some((g) => g === undefined)) return undefined;
+    const vetoes = vetoWords.map((w) => this.pattern(w));
+    if ([...patterns, ...guards, ...vetoes].some((p) => p === undefined)) return undefined;
     return {
       end: statement.keyword as 'left' | 'right',
       mode,
       patterns: patterns as Matcher[],
       guards: guards as Matcher[],
+      vetoes: vetoes as Matcher[],
       written: patternWords.map((w) => w.text),
       file: this.file,
       line: statement.line,

@@ -13,6 +13,8 @@ export interface HeadStep {
   patterns: Matcher[];
   /** The step applies only when some child matches one of these (`if` patterns); empty: always. */
   guards: Matcher[];
+  /** The step does not apply when some child matches one of these (`unless` patterns). */
+  vetoes: Matcher[];
   /** The patterns as written, for explanations. */
   written: string[];
   /** Where the step stands: file and 1-based line. */

@@ -25,6 +25,12 @@ describe('the table language', () => {
     expect(table.fallback.steps[0]).toMatchObject({ end: 'right', mode: 'first' });
   });
 
+  it('skips a step with `unless` when a child matches', async () => {
+    const { headOf } = await import('../support/convert.js');
+    expect(headOf('(NP (NNP Mira) (NNP Holm))', 'en-content')).toBe('Mira');
+    expect(headOf('(NP (DT the) (NNP Holm) (NNP Ferry))', 'en-content')).toBe('Ferry');
+  });
+
   it('reports a line that is not a statement with its line and column', () => {
     expect(problems(() => compileHeadTable('table t\nhead NP\n  Left any NN\n'))).toEqual([
       expect.stringMatching(/^table-syntax@3:3: /),
