@@ -23,11 +23,22 @@ export interface AttachmentError {
   oracleRight: boolean;
 }
 
+/** Scored words and wrong heads by the category of the phrase where words attach. */
+export interface ParentTally {
+  category: string;
+  words: number;
+  errors: number;
+  /** Sentence ids of the first few errors. */
+  examples: string[];
+}
+
 /** Scores of a conversion against gold dependencies, with the oracle's beside them. */
 export interface ConversionScore {
   scorer: AttachmentScorer;
   oracle: AttachmentScorer;
   errors: AttachmentError[];
+  /** Per parent category, most errors first. */
+  byParent: ParentTally[];
   /** Trees that did not convert, and pairs whose words did not line up. */
   skipped: number;
 }
@@ -42,10 +53,12 @@ export async function scoreConversion(
   gold: AsyncIterable<DependencySentence>,
   settings: ConversionSettings,
   report: Report,
+  withPunctuation = false,
 ): Promise<ConversionScore> {
-  const scorer = new AttachmentScorer();
-  const oracle = new AttachmentScorer();
+  const scorer = new AttachmentScorer(withPunctuation);
+  const oracle = new AttachmentScorer(withPunctuation);
   const errors: AttachmentError[] = [];
+  const parents = new Map<string, ParentTally>();
   let skipped = 0;
   const goldIterator = gold[Symbol.asyncIterator]();
   for await (const tree of trees) {
@@ -61,21 +74,31 @@ export async function scoreConversion(
     }
     if (!scorer.add(conversion.sentence, goldSentence)) {
       skipped++;
-      report({ code: 'misaligned', severity: 'warning', message: `sentence ${id} does not line up with gold sentence ${goldSentence.id ?? '?'}`, file: tree.file ?? '-', offset: tree.position?.start ?? 0, line: tree.source?.pointAt(tree.position?.start ?? 0).line ?? 1, column: 1 });
+      const where = tree.source && tree.position ? tree.source.pointAt(tree.position.start) : { line: 1, column: 1 };
+      const message = `tree ${id} and gold sentence ${goldSentence.id ?? '?'} do not have the same words; left out`;
+      report({ code: 'misaligned', severity: 'warning', message, file: tree.file ?? '-', offset: tree.position?.start ?? 0, line: where.line, column: where.column });
       continue;
     }
     const oracleConversion = convertTree(tree, { ...settings, oracle: heads }, id, id);
     if (oracleConversion) oracle.add(oracleConversion.sentence, goldSentence);
     const goldWords = goldSentence.lines.filter((l): l is DependencyWord => l.type === 'word');
+    const parentOf = parentsByWord(conversion.root, conversion.words.length);
     conversion.sentence.lines.forEach((line, i) => {
       const goldWord = goldWords[i]!;
-      if (isPunctuation(goldWord) || line.head === goldWord.head) return;
-      const oracleRight = oracleConversion?.sentence.lines[i]?.head === goldWord.head;
+      if (!withPunctuation && isPunctuation(goldWord)) return;
       const word = conversion.words[i]!;
-      const parent = findParent(conversion.root, word.index);
+      const parent = parentOf[word.index];
+      const category = parent?.category || 'ROOT';
+      let tally = parents.get(category);
+      if (!tally) parents.set(category, (tally = { category, words: 0, errors: 0, examples: [] }));
+      tally.words++;
+      if (line.head === goldWord.head) return;
+      tally.errors++;
+      if (tally.examples.length < 3 && !tally.examples.includes(id)) tally.examples.push(id);
+      const oracleRight = oracleConversion?.sentence.lines[i]?.head === goldWord.head;
       errors.push({
         sentence: id,
-        parent: parent?.category ?? 'ROOT',
+        parent: category,
         goldRelation: universalPart(goldWord.deprel),
         stepLine: parent?.head?.line,
         word: word.index,
@@ -86,22 +109,25 @@ export async function scoreConversion(
       });
     });
   }
-  return { scorer, oracle, errors, skipped };
+  const byParent = [...parents.values()].sort((a, b) => b.errors - a.errors || b.words - a.words);
+  return { scorer, oracle, errors, byParent, skipped };
 }
 
 import type { ConversionNode, PhraseNode } from '../convert/conversion-tree.js';
 import { headWordOf } from '../convert/conversion-tree.js';
 
-/** The phrase in which a word attaches: the lowest phrase of which it is not the head word. */
-function findParent(root: ConversionNode, index: number): PhraseNode | undefined {
-  let found: PhraseNode | undefined;
+/** For every word, the phrase in which it attaches: the lowest phrase of which it is not the head word. */
+function parentsByWord(root: ConversionNode, count: number): Array<PhraseNode | undefined> {
+  const parents: Array<PhraseNode | undefined> = new Array(count + 1);
   const visit = (node: ConversionNode) => {
     if (node.kind !== 'phrase') return;
+    const own = headWordOf(node).index;
     for (const child of node.children) {
-      if (headWordOf(child).index === index && headWordOf(node).index !== index) found = node;
+      const word = headWordOf(child).index;
+      if (word !== own) parents[word] = node;
       visit(child);
     }
   };
   visit(root);
-  return found;
+  return parents;
 }

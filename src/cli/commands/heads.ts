@@ -8,7 +8,8 @@ import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-opti
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
-import { readTreesOf } from '../read-trees.js';
+import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { scoreConversion, type ConversionScore } from '../../evaluate/score-conversion.js';
 
 export function registerHeads(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const heads = program.command('heads').description('look into head tables: why a head was chosen');
@@ -20,6 +21,16 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('-o, --output <file>', 'write the explanation to a file (default: standard output)');
   addConversionOptions(explain);
   addBracketedReadOptions(explain).action(async (file: string, options: Record<string, unknown>) => done(await explainHeads(file, options, io)));
+  const score = heads
+    .command('score')
+    .description('convert bracketed trees and score them against gold dependencies: UAS, LAS and where the head table goes wrong')
+    .argument('<files...>', 'bracketed files, in the order of the gold sentences')
+    .requiredOption('--gold <files...>', 'CoNLL-U files with the gold dependencies of the same sentences, in order')
+    .option('--with-punctuation', 'score punctuation too (left out by default)')
+    .option('--json', 'print the scores as JSON')
+    .option('-o, --output <file>', 'write the report to a file (default: standard output)');
+  addConversionOptions(score);
+  addBracketedReadOptions(score).action(async (files: string[], options: Record<string, unknown>) => done(await scoreHeads(files, options, io)));
   for (const command of heads.commands) {
     command.exitOverride().configureOutput({ writeOut: (text) => io.stdout.write(text), writeErr: (text) => io.stderr.write(text) });
   }
@@ -70,4 +81,76 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
   }
   if (wanted !== undefined && number < wanted) return { code: ExitCode.UsageOrIO, messages: [`${file} has ${number} trees; there is no tree ${wanted}`] };
   return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
+
+async function scoreHeads(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+  const settings = conversionSettings(options);
+  if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+  const trees = await openInputs(files, io);
+  const gold = await openInputs(options.gold as string[], io);
+  const failures = [...trees.failures, ...gold.failures];
+  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  const output = Output.to(options.output as string | undefined, io);
+  let errors = 0;
+  const report = (d: Diagnostic) => {
+    if (d.severity === 'error') errors++;
+    io.stderr.write(formatDiagnostic(d) + '\n');
+  };
+  try {
+    const result = await scoreConversion(
+      readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
+      readSentencesOf(gold.inputs, report, io),
+      settings,
+      report,
+      options.withPunctuation === true,
+    );
+    const { scorer, oracle, byParent } = result;
+    if (options.json === true) {
+      const json = {
+        sentences: scorer.score.sentences,
+        words: scorer.score.words,
+        uas: round(scorer.uas),
+        las: round(scorer.las),
+        oracleUas: round(oracle.uas),
+        misaligned: scorer.score.misaligned,
+        byParent: byParent.map(({ category, words, errors: wrong, examples }) => ({ category, words, errors: wrong, examples })),
+      };
+      await output.write(JSON.stringify(json, null, 2) + '\n');
+    } else {
+      await output.write(formatScore(result, settings.heads.name));
+    }
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
+
+function round(value: number): number {
+  return Math.round(value * 10000) / 10000;
+}
+
+function formatScore(result: ConversionScore, table: string): string {
+  const { scorer, oracle, byParent, errors } = result;
+  const percent = (n: number) => (100 * n).toFixed(2) + '%';
+  const lines = [
+    `${scorer.score.sentences} sentences, ${scorer.score.words} words scored${scorer.score.misaligned ? `, ${scorer.score.misaligned} sentences misaligned (left out)` : ''}`,
+    `UAS ${percent(scorer.uas)}   LAS ${percent(scorer.las)}   (oracle of head percolation: UAS ${percent(oracle.uas)})`,
+    '',
+    'wrong heads by the phrase where the word attaches',
+    `  ${'category'.padEnd(10)} ${'words'.padStart(8)} ${'wrong'.padStart(7)} ${'share'.padStart(7)}  examples`,
+  ];
+  for (const tally of byParent.slice(0, 15)) {
+    const share = tally.words ? ((100 * tally.errors) / tally.words).toFixed(1) + '%' : '';
+    lines.push(`  ${tally.category.padEnd(10)} ${String(tally.words).padStart(8)} ${String(tally.errors).padStart(7)} ${share.padStart(7)}  ${tally.examples.join(' ')}`);
+  }
+  const bySteps = new Map<string, number>();
+  for (const error of errors) {
+    const key = error.stepLine === undefined ? `${error.parent}: no step (coordination, oracle or default)` : `${error.parent}: ${table} line ${error.stepLine}`;
+    bySteps.set(key, (bySteps.get(key) ?? 0) + 1);
+  }
+  lines.push('', 'wrong heads by the step of the table that chose the head');
+  for (const [key, n] of [...bySteps].sort((a, b) => b[1] - a[1]).slice(0, 10)) lines.push(`  ${String(n).padStart(7)}  ${key}`);
+  return lines.join('\n') + '\n';
 }
