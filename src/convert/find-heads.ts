@@ -60,7 +60,8 @@ export function chooseHead(phrase: PhraseNode, table: HeadTable): HeadChoice {
   return chooseFrom(phrase.children.map(candidateOf), phrase.category, table);
 }
 
-function chooseFrom(candidates: Candidate[], category: string, table: HeadTable): HeadChoice {
+/** The head a table chooses among candidates for a parent category (no coordination styling). */
+export function chooseFrom(candidates: Candidate[], category: string, table: HeadTable): HeadChoice {
   const own = table.blocks.get(category);
   for (const block of own ? [own, table.fallback] : [table.fallback]) {
     const found = searchBlock(block, candidates, table);

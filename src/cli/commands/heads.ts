@@ -10,6 +10,8 @@ import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { scoreConversion, type ConversionScore } from '../../evaluate/score-conversion.js';
+import { collectPhrases, suggestBlocks, writeSuggestedTable } from '../../evaluate/suggest-heads.js';
+import { basename } from 'node:path';
 
 export function registerHeads(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const heads = program.command('heads').description('look into head tables: why a head was chosen');
@@ -31,6 +33,19 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(score);
   addBracketedReadOptions(score).action(async (files: string[], options: Record<string, unknown>) => done(await scoreHeads(files, options, io)));
+  const suggest = heads
+    .command('suggest')
+    .description('learn from gold dependencies which child heads each phrase, and write a head table that improves on a base table')
+    .argument('<files...>', 'bracketed files, in the order of the gold sentences')
+    .requiredOption('--gold <files...>', 'CoNLL-U files with the gold dependencies of the same sentences, in order')
+    .option('--from <table>', 'the base table to build on and keep where it is right', 'generic')
+    .requiredOption('-o, --output <file>', 'the new table file')
+    .option('--name <name>', 'the new table\'s name (default: from the output file)')
+    .addOption(new Option('--min-phrases <n>', 'fewest phrases of a category to change its block').default(30).argParser((v) => Number.parseInt(v, 10)))
+    .addOption(new Option('--min-gain <share>', 'least gain, as a share of the phrases, to change a block').default(0.01).argParser(Number.parseFloat))
+    .addOption(new Option('--coordination <style>', 'coordination style (its phrases are left out of learning)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
+    .addOption(new Option('--traces <mode>', 'where antecedents of traces attach').choices(['surface', 'restore']).default('surface'));
+  addBracketedReadOptions(suggest).action(async (files: string[], options: Record<string, unknown>) => done(await suggestHeads(files, options, io)));
   for (const command of heads.commands) {
     command.exitOverride().configureOutput({ writeOut: (text) => io.stdout.write(text), writeErr: (text) => io.stderr.write(text) });
   }
@@ -153,4 +168,37 @@ function formatScore(result: ConversionScore, table: string): string {
   lines.push('', 'wrong heads by the step of the table that chose the head');
   for (const [key, n] of [...bySteps].sort((a, b) => b[1] - a[1]).slice(0, 10)) lines.push(`  ${String(n).padStart(7)}  ${key}`);
   return lines.join('\n') + '\n';
+}
+
+async function suggestHeads(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+  const base = options.from as string;
+  const settings = conversionSettings({ ...options, heads: base, punctuation: 'phrase' });
+  if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+  const trees = await openInputs(files, io);
+  const gold = await openInputs(options.gold as string[], io);
+  const failures = [...trees.failures, ...gold.failures];
+  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  let errors = 0;
+  const report = (d: Diagnostic) => {
+    if (d.severity === 'error') errors++;
+    io.stderr.write(formatDiagnostic(d) + '\n');
+  };
+  const path = options.output as string;
+  const name = (options.name as string | undefined) ?? basename(path).replace(/\.heads$/, '');
+  const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings);
+  const { changed, kept } = suggestBlocks(collected.samples, settings.heads, {
+    minimumPhrases: options.minPhrases as number,
+    minimumGain: options.minGain as number,
+  });
+  const output = Output.to(path, io);
+  try {
+    await output.write(writeSuggestedTable(name, base, collected.sentences, changed, kept) + '\n');
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+  const misaligned = collected.misaligned ? `, ${collected.misaligned} left out (words do not line up)` : '';
+  io.stderr.write(`treebridge: learned from ${collected.sentences} sentences${misaligned}: ${changed.length} blocks changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
+  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
