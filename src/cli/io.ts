@@ -1,3 +1,4 @@
+import { once } from 'node:events';
 import { createWriteStream, type WriteStream } from 'node:fs';
 import { rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
@@ -91,10 +92,8 @@ export class Output {
   async write(text: string): Promise<void> {
     this.check();
     if (!this.stream.write(text)) {
-      await new Promise<void>((resolve) => {
-        this.stream.once('drain', resolve);
-        this.stream.once('error', () => resolve());
-      });
+      // Wait for the stream to drain; an error instead is kept by the listener above and thrown below.
+      await once(this.stream, 'drain').catch(() => undefined);
     }
     this.check();
   }

@@ -3,6 +3,7 @@ import { registerRewrite } from './commands/rewrite.js';
 import { registerStats } from './commands/stats.js';
 import { registerToDeps } from './commands/to-deps.js';
 import { registerHeads } from './commands/heads.js';
+import { registerToBrackets } from './commands/to-brackets.js';
 import { registerValidate } from './commands/validate.js';
 import { ExitCode, type CommandResult } from './exit-codes.js';
 import { describeError, OutputError, type CliIO } from './io.js';
@@ -29,6 +30,7 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
   registerStats(program, io, done);
   registerToDeps(program, io, done);
   registerHeads(program, io, done);
+  registerToBrackets(program, io, done);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({
       writeOut: (text) => io.stdout.write(text),

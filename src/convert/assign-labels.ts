@@ -6,7 +6,8 @@ import { candidateOf } from './find-heads.js';
  * The relation of every attachment: `root` for the root; with a label table,
  * the relation of its first rule whose conditions all hold (else its
  * `otherwise`); without one, `conj` and `cc` in coordinations, else the first
- * function tag of the dependent's phrase (lower-cased letters), else `dep`.
+ * function tag of the dependent's phrase (lower-cased letters and a subtype
+ * colon), else `dep`.
  */
 export function assignLabels(attachments: Attachment[], table: LabelTable | undefined, heads: HeadTable): string[] {
   return attachments.map((attachment) => {
@@ -31,6 +32,7 @@ function untabled(attachment: Attachment): string {
   if (attachment.role === 'coordinator') return 'cc';
   if (attachment.role === 'raised') return 'obj';
   const tag = attachment.node.kind === 'phrase' ? attachment.node.functions[0] : undefined;
-  const letters = tag?.toLowerCase().replace(/[^a-z]/g, '');
-  return letters ? letters : 'dep';
+  // Letters and a subtype colon survive: `SBJ` gives `sbj`, `obl:tmod` stays as it is.
+  const relation = tag?.toLowerCase().replace(/[^a-z:]/g, '').replace(/^:+|:+$/g, '');
+  return relation && /^[a-z]+(:[a-z]+)?$/.test(relation) ? relation : 'dep';
 }

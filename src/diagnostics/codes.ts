@@ -32,6 +32,7 @@ export const diagnosticCodes = {
   'missing-lemma': { severity: 'warning', meaning: 'lemma splitting is on but a word has no `-lemma` part' },
   // Conversion.
   'nothing-to-convert': { severity: 'warning', meaning: 'a tree without words (only empty elements or notes) is skipped' },
+  'not-a-tree': { severity: 'error', meaning: 'a sentence whose heads do not form a tree cannot be bracketed' },
   'misaligned': { severity: 'warning', meaning: 'a converted sentence and its gold sentence do not have the same words' },
   // Head and label tables.
   'table-syntax': { severity: 'error', meaning: 'a line of a table that does not parse' },

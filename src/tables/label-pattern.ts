@@ -16,8 +16,8 @@ export type Matcher = (candidate: Candidate) => boolean;
 
 /**
  * Compiles a label pattern: `NP` (category NP, any function tags), `NP-PRD`
- * (and function tag PRD), `*-PRD` (any category with PRD), `VB*` (category
- * starting VB), `*` (anything); a head-word test `[pos=…]`, `[form=…]` or
+ * (and function tag PRD), `*-PRD` (any category with PRD), `*-` (any category
+ * without function tags), `VB*` (category starting VB), `*` (anything); a head-word test `[pos=…]`, `[form=…]` or
  * `[lemma=…]` narrows it (values may end in `*` for a prefix; forms and lemmas
  * compare without case).
  */
@@ -30,6 +30,8 @@ export function compilePattern(pattern: PatternSyntax): Matcher {
 
 function compileLabel(text: string): Matcher {
   if (text === '*') return () => true;
+  // `*-`: any child without function tags (the head of a bracketing built by to-brackets).
+  if (text === '*-') return (candidate) => candidate.functions.length === 0;
   if (text.startsWith('*-')) {
     const tags = text.slice(2).split('-');
     return (candidate) => tags.every((tag) => candidate.functions.includes(tag));

@@ -1,0 +1,75 @@
+import { Option, type Command } from 'commander';
+import type { Diagnostic } from '../../diagnostics/diagnostic.js';
+import { diagnose } from '../../diagnostics/diagnostic.js';
+import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { writeTree, type Layout } from '../../formats/bracketed/write-bracketed.js';
+import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
+import { loadCategoryTable } from '../../tables/load-category-table.js';
+import { TableError } from '../../tables/load-table.js';
+import { ExitCode, type CommandResult } from '../exit-codes.js';
+import { openInputs, Output, type CliIO } from '../io.js';
+import { readSentencesOf } from '../read-trees.js';
+
+export function registerToBrackets(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
+  program
+    .command('to-brackets')
+    .description('rebuild bracketed trees from dependency trees in CoNLL-U; arcs that cannot be projective are lifted and marked with *ICH* traces')
+    .argument('<files...>', 'CoNLL-U files, or - for standard input')
+    .option('--categories <table>', 'category table: a name in headrules/ or a path', 'ud')
+    .addOption(new Option('--shape <shape>', 'flat: one phrase per head; layered: one phrase level per dependent, nearest first').choices(['flat', 'layered']).default('flat'))
+    .addOption(new Option('--pos <column>', 'the column that gives the part-of-speech brackets').choices(['upos', 'xpos']).default('upos'))
+    .addOption(new Option('--layout <layout>', 'line: one tree per line; indented').choices(['line', 'indented']).default('line'))
+    .option('--lifts', 'report each sentence with lifted arcs on standard error')
+    .option('-o, --output <file>', 'write the bracketed trees to a file (default: standard output)')
+    .action(async (files: string[], options: Record<string, unknown>) => done(await toBrackets(files, options, io)));
+}
+
+async function toBrackets(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+  let settings: BracketSettings;
+  try {
+    settings = { categories: loadCategoryTable(options.categories as string), shape: options.shape as BracketSettings['shape'], pos: options.pos as BracketSettings['pos'] };
+  } catch (error) {
+    if (!(error instanceof TableError)) throw error;
+    return { code: ExitCode.UsageOrIO, messages: error.diagnostics.map((d) => formatDiagnostic(d)) };
+  }
+  const { inputs, failures } = await openInputs(files, io);
+  const output = Output.to(options.output as string | undefined, io);
+  let errors = 0;
+  const report = (d: Diagnostic) => {
+    if (d.severity === 'error') errors++;
+    io.stderr.write(formatDiagnostic(d) + '\n');
+  };
+  let read = 0;
+  let written = 0;
+  let lifted = 0;
+  let liftedSentences = 0;
+  try {
+    for await (const sentence of readSentencesOf(inputs, report, io)) {
+      read++;
+      const result = buildBrackets(sentence, settings);
+      if (!result) {
+        if (sentence.source && sentence.position) {
+          report(diagnose('not-a-tree', 'the heads of this sentence do not form a tree; skipped', { file: sentence.file ?? '-', offset: sentence.position.start, lines: sentence.source }));
+        }
+        continue;
+      }
+      written++;
+      if (result.lifts.length > 0) {
+        lifted += result.lifts.length;
+        liftedSentences++;
+        if (options.lifts === true) {
+          const arcs = result.lifts.map((l) => `${l.dependent}: ${l.from}→${l.to}`).join(', ');
+          io.stderr.write(`${sentence.id ?? `sentence ${read}`}: lifted ${arcs}\n`);
+        }
+      }
+      await output.write(writeTree(result.tree, { layout: options.layout as Layout }));
+    }
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+  io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}\n`);
+  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
