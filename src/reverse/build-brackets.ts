@@ -63,8 +63,10 @@ export function buildBrackets(sentence: DependencySentence, settings: BracketSet
   const preterminal = (w: number): Preterminal => {
     const word = words[w - 1]!;
     const tag = settings.pos === 'xpos' && word.xpos !== '_' ? word.xpos : word.upos !== '_' ? word.upos : 'X';
-    // A bracket leaf holds no space: a space inside a form becomes a no-break space.
-    return { type: 'preterminal', pos: tag, word: { type: 'word', form: word.form.replace(/ /g, '\u00a0'), lemma: undefined } };
+    // Round brackets in forms are written -LRB- and -RRB-, as bracketing conventions have it (Bies et al.
+    // 1995, from memory), so that readers without escapes read them; a space becomes a no-break space.
+    const form = word.form.replace(/\(/g, '-LRB-').replace(/\)/g, '-RRB-').replace(/ /g, '\u00a0');
+    return { type: 'preterminal', pos: tag, word: { type: 'word', form, lemma: undefined } };
   };
   const trace = (index: number): EmptyElement => ({
     type: 'empty',

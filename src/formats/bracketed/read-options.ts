@@ -17,7 +17,7 @@ export interface BracketedReadOptions {
   /**
    * Tags under which `*`, `*x*` and `0` are ordinary words rather than empty
    * elements (a real asterisk tagged `SYM`, the number `0` tagged `CD`); tags
-   * starting `NUM` are always included. Default `SYM CD LS NFP` and punctuation tags.
+   * starting `NUM` are always included. Default `SYM CD LS NFP`, punctuation tags and the 17 Universal POS tags.
    */
   literalTags?: string[];
   /** Where a new tree may begin; see {@link TreeBreaks}. */
@@ -32,7 +32,12 @@ export interface BracketedReadOptions {
 export type ResolvedReadOptions = Required<Omit<BracketedReadOptions, 'maxTreeLength' | 'maxDepth'>> &
   Pick<BracketedReadOptions, 'maxTreeLength' | 'maxDepth'>;
 
-export const defaultLiteralTags = ['SYM', 'CD', 'LS', 'NFP', '.', ',', ':', '``', "''", '-LRB-', '-RRB-', 'HYPH', '$', '#'];
+export const defaultLiteralTags = [
+  // Penn Treebank tags of symbols, numbers and punctuation.
+  'SYM', 'CD', 'LS', 'NFP', '.', ',', ':', '``', "''", '-LRB-', '-RRB-', 'HYPH', '$', '#',
+  // The 17 Universal POS tags, so that bracketings built from UD trees (to-brackets) read back.
+  'ADJ', 'ADP', 'ADV', 'AUX', 'CCONJ', 'DET', 'INTJ', 'NOUN', 'NUM', 'PART', 'PRON', 'PROPN', 'PUNCT', 'SCONJ', 'SYM', 'VERB', 'X',
+];
 
 export function resolveReadOptions(options: BracketedReadOptions = {}): ResolvedReadOptions {
   return {
