@@ -106,3 +106,12 @@ console.log(`
 stats on ${conllu.length} CoNLL-U files, ${conlluMB.toFixed(1)} MB (fastest of ${rounds}):`);
 console.log(`${'reader'.padEnd(30)} ${'sentences'.padStart(9)} ${'seconds'.padStart(8)} ${'MB/s'.padStart(7)} ${'sent./s'.padStart(9)} ${'peak MB'.padStart(8)}`);
 console.log(row('treebridge stats', conlluMB, statsMeasure) + `   (${Math.round(words / statsMeasure.seconds).toLocaleString('en-US')} words/s)`);
+
+// to-brackets: bracketings rebuilt from every shared CoNLL-U file.
+const bracketRuns: Measure[] = [];
+for (let round = 0; round < rounds; round++) {
+  bracketRuns.push(JSON.parse(execFileSync(process.execPath, [...nodeFlags, join(here, 'to-brackets-worker.js'), ...conllu], { encoding: 'utf8', maxBuffer: 1 << 24 })));
+}
+const bracketing = fastest(bracketRuns) as Measure & { words: number };
+console.log(`\nto-brackets on the same files (read + lift + build + write, flat shape; fastest of ${rounds}):`);
+console.log(row('treebridge to-brackets', conlluMB, bracketing) + `   (${Math.round(bracketing.words / bracketing.seconds).toLocaleString('en-US')} words/s)`);
