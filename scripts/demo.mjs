@@ -57,6 +57,11 @@ const steps = [
     expect: 0,
   },
   {
+    say: 'The way back: a dependency tree with a crossing arc becomes a bracketing, the arc lifted and marked with an *ICH* trace.',
+    args: ['to-brackets', '--lifts', '--layout', 'indented', 'demo-data/crossing.conllu'],
+    expect: 0,
+  },
+  {
     say: 'The historical-style file, with its word-lemma leaves, converted with the Penn-Helsinki table.',
     args: ['to-deps', '--heads', 'penn-historical', '--lemmas', '-o', 'demo-output/ferry-log.conllu', 'demo-data/ferry-log.psd'],
     expect: 0,
