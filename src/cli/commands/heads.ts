@@ -2,10 +2,9 @@ import { Option, type Command } from 'commander';
 import { headWordOf, type ConversionNode } from '../../convert/conversion-tree.js';
 import { findHeads } from '../../convert/find-heads.js';
 import { prepareTree } from '../../convert/prepare-tree.js';
-import type { Diagnostic } from '../../diagnostics/diagnostic.js';
-import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
@@ -60,11 +59,8 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
   const { inputs, failures } = await openInputs([file], io);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   const output = Output.to(options.output as string | undefined, io);
-  let errors = 0;
-  const report = (d: Diagnostic) => {
-    if (d.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(d) + '\n');
-  };
+  const problems = new ProblemPrinter(io);
+  const report = problems.report;
   let number = 0;
   try {
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
@@ -95,7 +91,7 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
     throw error;
   }
   if (wanted !== undefined && number < wanted) return { code: ExitCode.UsageOrIO, messages: [`${file} has ${number} trees; there is no tree ${wanted}`] };
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
 
 async function scoreHeads(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
@@ -106,11 +102,8 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
   const failures = [...trees.failures, ...gold.failures];
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   const output = Output.to(options.output as string | undefined, io);
-  let errors = 0;
-  const report = (d: Diagnostic) => {
-    if (d.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(d) + '\n');
-  };
+  const problems = new ProblemPrinter(io);
+  const report = problems.report;
   try {
     const result = await scoreConversion(
       readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
@@ -139,7 +132,7 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
     await output.abandon();
     throw error;
   }
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
 
 function round(value: number): number {
@@ -178,11 +171,8 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   const gold = await openInputs(options.gold as string[], io);
   const failures = [...trees.failures, ...gold.failures];
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  let errors = 0;
-  const report = (d: Diagnostic) => {
-    if (d.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(d) + '\n');
-  };
+  const problems = new ProblemPrinter(io);
+  const report = problems.report;
   const path = options.output as string;
   const name = (options.name as string | undefined) ?? basename(path).replace(/\.heads$/, '');
   const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings);
@@ -200,5 +190,5 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   }
   const misaligned = collected.misaligned ? `, ${collected.misaligned} left out (words do not line up)` : '';
   io.stderr.write(`treebridge: learned from ${collected.sentences} sentences${misaligned}: ${changed.length} blocks changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

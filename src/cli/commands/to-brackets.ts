@@ -1,11 +1,11 @@
 import { Option, type Command } from 'commander';
-import type { Diagnostic } from '../../diagnostics/diagnostic.js';
 import { diagnose } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import { writeTree, type Layout } from '../../formats/bracketed/write-bracketed.js';
 import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
+import { ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf } from '../read-trees.js';
@@ -34,11 +34,8 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   }
   const { inputs, failures } = await openInputs(files, io);
   const output = Output.to(options.output as string | undefined, io);
-  let errors = 0;
-  const report = (d: Diagnostic) => {
-    if (d.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(d) + '\n');
-  };
+  const problems = new ProblemPrinter(io);
+  const report = problems.report;
   let read = 0;
   let written = 0;
   let lifted = 0;
@@ -71,5 +68,5 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   }
   io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}\n`);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

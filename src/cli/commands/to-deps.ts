@@ -1,11 +1,11 @@
 import { basename } from 'node:path';
 import type { Command } from 'commander';
 import { convertTree } from '../../convert/convert-tree.js';
-import { diagnose, type Diagnostic } from '../../diagnostics/diagnostic.js';
-import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { diagnose } from '../../diagnostics/diagnostic.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readTreesOf } from '../read-trees.js';
@@ -25,11 +25,8 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
   const { inputs, failures } = await openInputs(files, io);
   const output = Output.to(options.output as string | undefined, io);
-  let errors = 0;
-  const report = (diagnostic: Diagnostic) => {
-    if (diagnostic.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(diagnostic) + '\n');
-  };
+  const problems = new ProblemPrinter(io);
+  const report = problems.report;
   let read = 0;
   let converted = 0;
   let skipped = 0;
@@ -57,8 +54,8 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
     await output.abandon();
     throw error;
   }
-  const notRead = errors > 0 ? `; ${errors} problem${errors === 1 ? '' : 's'} kept trees from being read (above)` : '';
+  const notRead = problems.errors > 0 ? `; ${problems.errors} problem${problems.errors === 1 ? '' : 's'} kept trees from being read (above)` : '';
   io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read: ${converted} converted, ${skipped} skipped${notRead}\n`);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

@@ -276,9 +276,7 @@ export class TreeBuilder implements TreeAssembler {
     return { start: this.base + this.starts[open]!, end: this.base + this.ends[close]! };
   }
 
-  private tokenSpan(token: number): Position {
-    return { start: this.base + this.starts[token]!, end: this.base + this.ends[token]! };
-  }
+
 
   private where(token: number) {
     return this.at(this.starts[token]!);
