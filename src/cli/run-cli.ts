@@ -4,6 +4,7 @@ import { registerStats } from './commands/stats.js';
 import { registerToDeps } from './commands/to-deps.js';
 import { registerHeads } from './commands/heads.js';
 import { registerToBrackets } from './commands/to-brackets.js';
+import { registerRoundtrip } from './commands/roundtrip.js';
 import { registerValidate } from './commands/validate.js';
 import { ExitCode, type CommandResult } from './exit-codes.js';
 import { describeError, OutputError, type CliIO } from './io.js';
@@ -31,6 +32,7 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
   registerToDeps(program, io, done);
   registerHeads(program, io, done);
   registerToBrackets(program, io, done);
+  registerRoundtrip(program, io, done);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({
       writeOut: (text) => io.stdout.write(text),

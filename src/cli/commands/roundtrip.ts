@@ -1,0 +1,119 @@
+import { Option, type Command } from 'commander';
+import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport } from '../../evaluate/roundtrip.js';
+import { loadCategoryTable } from '../../tables/load-category-table.js';
+import { TableError } from '../../tables/load-table.js';
+import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { ExitCode, type CommandResult } from '../exit-codes.js';
+import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
+import { openInputs, Output, type CliIO } from '../io.js';
+import { ProblemPrinter } from '../print-problems.js';
+import { readSentencesOf, readTreesOf } from '../read-trees.js';
+
+export function registerRoundtrip(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
+  const command = program
+    .command('roundtrip')
+    .description('convert there and back and report what was lost: bracketed input goes to dependencies and back, CoNLL-U to brackets and back')
+    .argument('<files...>', 'bracketed or CoNLL-U files, or - for standard input')
+    .addOption(new Option('--from <format>', 'input format (default: by extension)').choices([...inputFormats]))
+    .option('--categories <table>', 'category table for the rebuilt bracketings', 'ud')
+    .addOption(new Option('--shape <shape>', 'shape of the rebuilt bracketings').choices(['flat', 'layered']).default('flat'))
+    .option('--json', 'print the report as JSON')
+    .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser((v) => Number.parseInt(v, 10)))
+    .option('--fail-above <limits...>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); kinds: ' + lossKinds.join(', '))
+    .option('-o, --output <file>', 'write the report to a file (default: standard output)');
+  addConversionOptions(command, false);
+  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await roundtrip(files, options, io)));
+}
+
+async function roundtrip(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+  const limits = parseLimits(options.failAbove as string[] | undefined);
+  if (typeof limits === 'string') return { code: ExitCode.UsageOrIO, messages: [limits] };
+  const { inputs, failures } = await openInputs(files, io);
+  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  const format = commonFormat(inputs, options.from as InputFormat | undefined);
+  if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  let categories;
+  try {
+    categories = loadCategoryTable(options.categories as string);
+  } catch (error) {
+    if (!(error instanceof TableError)) throw error;
+    return { code: ExitCode.UsageOrIO, messages: error.diagnostics.map((d) => formatDiagnostic(d)) };
+  }
+  const problems = new ProblemPrinter(io);
+  let report: RoundTripReport;
+  if (format === 'bracketed') {
+    if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to go to dependencies: --heads NAME'] };
+    const settings = conversionSettings(options);
+    if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number);
+    let number = 0;
+    for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
+      number++;
+      trip.add(tree, tree.id ?? `${tree.file}-${number}`);
+    }
+    report = trip.report();
+  } else {
+    const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'restore', coordination: 'table' });
+    if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+    const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings);
+    let number = 0;
+    for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
+      number++;
+      trip.add(sentence, sentence.id ?? `${sentence.file}-${number}`);
+    }
+    report = trip.report();
+  }
+  const output = Output.to(options.output as string | undefined, io);
+  try {
+    await output.write(options.json === true ? JSON.stringify(jsonOf(report), null, 2) + '\n' : formatReport(report));
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+  const exceeded = Object.entries(limits).filter(([kind, limit]) => share(report, kind as LossKind) > limit!);
+  for (const [kind, limit] of exceeded) io.stderr.write(`treebridge: ${kind} losses ${share(report, kind as LossKind).toFixed(2)}% exceed ${limit}%\n`);
+  return { code: exceeded.length > 0 || problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
+
+function share(report: RoundTripReport, kind: LossKind): number {
+  return report.base === 0 ? 0 : (100 * report.losses[kind]) / report.base;
+}
+
+function parseLimits(values: string[] | undefined): Partial<Record<LossKind, number>> | string {
+  const limits: Partial<Record<LossKind, number>> = {};
+  for (const value of values ?? []) {
+    const match = /^([A-Za-z]+)=(\d+(?:\.\d+)?)%?$/.exec(value);
+    if (!match || !lossKinds.includes(match[1] as LossKind)) return `--fail-above takes KIND=PCT with KIND one of ${lossKinds.join(', ')}; got "${value}"`;
+    limits[match[1] as LossKind] = Number(match[2]);
+  }
+  return limits;
+}
+
+function jsonOf(report: RoundTripReport) {
+  const round = (v: number) => Math.round(v * 10000) / 10000;
+  const scores = report.brackets
+    ? { brackets: { precision: round(report.brackets.precision), recall: round(report.brackets.recall), f1: round(report.brackets.f1), labelledF1: round(report.brackets.labelledF1), crossing: report.brackets.crossing } }
+    : { attachment: { uas: round(report.attachment!.uas), las: round(report.attachment!.las) } };
+  return { direction: report.direction, sentences: report.sentences, exactMatch: report.exactMatch, ...scores, losses: report.losses, examples: report.examples };
+}
+
+function formatReport(report: RoundTripReport): string {
+  const percent = (v: number) => `${(100 * v).toFixed(2)}%`;
+  const lines = [`${report.direction === 'brackets' ? 'brackets → dependencies → brackets' : 'dependencies → brackets → dependencies'}: ${report.sentences} sentences, ${report.exactMatch} come back exactly`];
+  if (report.brackets) {
+    const b = report.brackets;
+    lines.push(`brackets: precision ${percent(b.precision)}, recall ${percent(b.recall)}, F1 ${percent(b.f1)}, labelled F1 ${percent(b.labelledF1)}, crossing ${b.crossing}`);
+  } else {
+    lines.push(`attachment: UAS ${percent(report.attachment!.uas)}, LAS ${percent(report.attachment!.las)}`);
+  }
+  lines.push('', `${'loss'.padEnd(14)} ${'count'.padStart(8)} ${'per 100'.padStart(8)}  examples`);
+  for (const kind of lossKinds) {
+    const count = report.losses[kind];
+    lines.push(`${kind.padEnd(14)} ${String(count).padStart(8)} ${share(report, kind).toFixed(2).padStart(8)}  ${report.examples[kind].join(' ')}`);
+  }
+  lines.push(`(per 100 ${report.direction === 'brackets' ? 'gold brackets' : 'words'}; unary, nesting and punctuation take each lost or added bracket once)`);
+  return lines.join('\n') + '\n';
+}

@@ -1,0 +1,215 @@
+import { convertTree, type ConversionSettings } from '../convert/convert-tree.js';
+import type { ConstituentNode, Tree } from '../model/constituency.js';
+import type { DependencySentence } from '../model/dependency.js';
+import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
+import type { HeadTable } from '../tables/table-model.js';
+import { AttachmentScorer } from './score-attachments.js';
+import { bracketScores, emptyTotals, scoreBrackets, type BracketTotals, type Span } from './parseval.js';
+
+/** What a round trip can lose; bracket kinds take every lost or added bracket exactly once. */
+export const lossKinds = ['unary', 'nesting', 'label', 'functionTags', 'emptyElements', 'coindexing', 'punctuation', 'wordsOrPos', 'other'] as const;
+export type LossKind = (typeof lossKinds)[number];
+
+/** Totals of a round trip over a corpus. */
+export interface RoundTripReport {
+  direction: 'brackets' | 'dependencies';
+  sentences: number;
+  exactMatch: number;
+  brackets?: ReturnType<typeof bracketScores>;
+  attachment?: { uas: number; las: number };
+  losses: Record<LossKind, number>;
+  examples: Record<LossKind, string[]>;
+  /** What the shares are of: gold brackets, or words. */
+  base: number;
+}
+
+interface Word {
+  index: number;
+  pos: string;
+  form: string;
+}
+
+/** The brackets of a tree as spans over its words (empty elements and notes left out), with its words. */
+export function spansOf(tree: Tree): { spans: Array<Span & { functions: number }>; words: Word[] } {
+  const words: Word[] = [];
+  const spans: Array<Span & { functions: number }> = [];
+  const visit = (node: ConstituentNode): [number, number] | undefined => {
+    if (node.type === 'preterminal') {
+      const index = words.length;
+      words.push({ index, pos: node.pos, form: node.word.form });
+      return [index, index + 1];
+    }
+    if (node.type !== 'phrase') return undefined;
+    let start = Infinity;
+    let end = -Infinity;
+    for (const child of node.children) {
+      const range = visit(child);
+      if (range) {
+        start = Math.min(start, range[0]);
+        end = Math.max(end, range[1]);
+      }
+    }
+    if (start === Infinity) return undefined;
+    spans.push({ label: node.label.category, start, end, functions: node.label.functions.length });
+    return [start, end];
+  };
+  tree.children.forEach(visit);
+  return { spans, words };
+}
+
+function countNodes(tree: Tree, test: (node: ConstituentNode) => boolean): number {
+  let count = 0;
+  const visit = (node: ConstituentNode) => {
+    if (test(node)) count++;
+    if (node.type === 'phrase') node.children.forEach(visit);
+  };
+  tree.children.forEach(visit);
+  return count;
+}
+
+/**
+ * Brackets → dependencies → brackets, tree by tree: the original and the
+ * round-tripped bracketing are scored (PARSEVAL, function tags removed) and
+ * every difference is put in one kind.
+ */
+export class BracketRoundTrip {
+  private readonly totals: BracketTotals = emptyTotals();
+  private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
+  private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
+
+  constructor(
+    private readonly conversion: ConversionSettings,
+    private readonly bracketing: BracketSettings,
+    private readonly maxExamples = 5,
+  ) {}
+
+  add(tree: Tree, id: string): Tree | undefined {
+    const dependencies = convertTree(tree, this.conversion, id, id);
+    if (!dependencies) return undefined;
+    const rebuilt = buildBrackets(dependencies.sentence, this.bracketing);
+    if (!rebuilt) return undefined;
+    const gold = spansOf(tree);
+    const test = spansOf(rebuilt.tree);
+    scoreBrackets(this.totals, gold.spans, test.spans);
+    const note = (kind: LossKind, count = 1) => {
+      if (count <= 0) return;
+      this.losses[kind] += count;
+      if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
+    };
+    this.classify(gold.spans, test.spans, gold.words, this.conversion.heads, note);
+    // Same span on both sides, different category.
+    const labelOf = (spans: Span[]) => new Map(spans.map((s) => [`${s.start}:${s.end}`, s.label]));
+    const testLabels = labelOf(test.spans);
+    let changed = 0;
+    for (const [span, label] of labelOf(gold.spans)) if (testLabels.has(span) && testLabels.get(span) !== label) changed++;
+    note('label', changed);
+    note('functionTags', gold.spans.filter((s) => s.functions > 0).length);
+    note('emptyElements', countNodes(tree, (n) => n.type === 'empty'));
+    note('coindexing', countNodes(tree, (n) => (n.type === 'phrase' || n.type === 'empty') && (n.label.coindex !== undefined || n.label.gapIndex !== undefined)));
+    const differing = gold.words.filter((w, i) => w.form !== test.words[i]?.form || w.pos !== test.words[i]?.pos).length + Math.abs(gold.words.length - test.words.length);
+    note('wordsOrPos', differing);
+    return rebuilt.tree;
+  }
+
+  /** Every lost and every added bracket goes to exactly one of unary, punctuation, nesting. */
+  private classify(gold: Span[], test: Span[], words: Word[], table: HeadTable, note: (kind: LossKind, count?: number) => void): void {
+    const key = (s: Span) => `${s.start}:${s.end}`;
+    const unmatched = (from: Span[], against: Span[]) => {
+      const pool = new Map<string, number>();
+      for (const s of against) pool.set(key(s), (pool.get(key(s)) ?? 0) + 1);
+      return from.filter((s) => {
+        const left = pool.get(key(s)) ?? 0;
+        if (left > 0) {
+          pool.set(key(s), left - 1);
+          return false;
+        }
+        return true;
+      });
+    };
+    const punctuation = (i: number) => {
+      const word = words[i];
+      return word !== undefined && table.punctuation({ category: word.pos, functions: [] });
+    };
+    // A span differs from another only by punctuation at its edges.
+    const trimmed = (s: Span) => {
+      let { start, end } = s;
+      while (start < end && punctuation(start)) start++;
+      while (end > start && punctuation(end - 1)) end--;
+      return `${start}:${end}`;
+    };
+    for (const [side, other] of [
+      [gold, test],
+      [test, gold],
+    ] as const) {
+      const sameSide = new Map<string, number>();
+      for (const s of side) sameSide.set(key(s), (sameSide.get(key(s)) ?? 0) + 1);
+      const otherTrimmed = new Set(other.map(trimmed));
+      for (const s of unmatched(side, other)) {
+        if ((sameSide.get(key(s)) ?? 0) > 1) note('unary');
+        else if (otherTrimmed.has(trimmed(s))) note('punctuation');
+        else note('nesting');
+      }
+    }
+  }
+
+  report(): RoundTripReport {
+    return {
+      direction: 'brackets',
+      sentences: this.totals.sentences,
+      exactMatch: this.totals.exact,
+      brackets: bracketScores(this.totals),
+      losses: this.losses,
+      examples: this.examples,
+      base: this.totals.gold,
+    };
+  }
+}
+
+/** Dependencies → brackets → dependencies, sentence by sentence: attachment scores and differences. */
+export class DependencyRoundTrip {
+  private readonly scorer = new AttachmentScorer(true);
+  private exact = 0;
+  private sentences = 0;
+  private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
+  private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
+
+  constructor(
+    private readonly bracketing: BracketSettings,
+    private readonly conversion: ConversionSettings,
+  ) {}
+
+  add(sentence: DependencySentence, id: string): void {
+    this.sentences++;
+    const rebuilt = buildBrackets(sentence, this.bracketing);
+    const back = rebuilt && convertTree(rebuilt.tree, { ...this.conversion, traces: 'restore' }, id, id);
+    if (!back) {
+      this.losses.other++;
+      if (this.examples.other.length < 5) this.examples.other.push(id);
+      return;
+    }
+    const before = this.scorer.score.labelsRight;
+    const words = sentence.lines.filter((l) => l.type === 'word').length;
+    if (!this.scorer.add(back.sentence, sentence)) {
+      this.losses.wordsOrPos++;
+      if (this.examples.wordsOrPos.length < 5) this.examples.wordsOrPos.push(id);
+      return;
+    }
+    if (this.scorer.score.labelsRight - before === words) this.exact++;
+    else {
+      this.losses.other += words - (this.scorer.score.labelsRight - before);
+      if (this.examples.other.length < 5) this.examples.other.push(id);
+    }
+  }
+
+  report(): RoundTripReport {
+    return {
+      direction: 'dependencies',
+      sentences: this.sentences,
+      exactMatch: this.exact,
+      attachment: { uas: this.scorer.uas, las: this.scorer.las },
+      losses: this.losses,
+      examples: this.examples,
+      base: this.scorer.score.words,
+    };
+  }
+}
