@@ -21,6 +21,8 @@ export interface RoundTripReport {
   examples: Record<LossKind, string[]>;
   /** What the shares are of: gold brackets, or words. */
   base: number;
+  /** Brackets direction: gold and round-tripped brackets, and those matched (unlabelled). */
+  counts?: { gold: number; test: number; matched: number };
 }
 
 interface Word {
@@ -161,6 +163,7 @@ export class BracketRoundTrip {
       losses: this.losses,
       examples: this.examples,
       base: this.totals.gold,
+      counts: { gold: this.totals.gold, test: this.totals.test, matched: this.totals.matched },
     };
   }
 }

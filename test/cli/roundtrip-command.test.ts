@@ -1,0 +1,51 @@
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { BracketRoundTrip } from '../../src/evaluate/roundtrip.js';
+import { loadCategoryTable } from '../../src/tables/load-category-table.js';
+import { loadHeadTable } from '../../src/tables/load-table.js';
+import { cli } from '../support/cli.js';
+import { projectRoot } from '../support/corpora.js';
+import { read } from '../support/read.js';
+
+const demo = join(projectRoot, 'demo-data/harbour.psd');
+
+describe('treebridge roundtrip', () => {
+  it('reports brackets → dependencies → brackets with the agreed JSON keys', async () => {
+    const { code, stdout } = await cli(['roundtrip', '--json', '--heads', 'en-content', '--pos-map', 'en-ptb', demo]);
+    expect(code).toBe(0);
+    const report = JSON.parse(stdout);
+    expect(Object.keys(report)).toEqual(['direction', 'sentences', 'exactMatch', 'brackets', 'losses', 'examples']);
+    expect(Object.keys(report.brackets)).toEqual(['precision', 'recall', 'f1', 'labelledF1', 'crossing']);
+    expect(Object.keys(report.losses)).toEqual(['unary', 'nesting', 'label', 'functionTags', 'emptyElements', 'coindexing', 'punctuation', 'wordsOrPos', 'other']);
+    expect(report).toMatchObject({ direction: 'brackets', sentences: 25, losses: { wordsOrPos: 0, emptyElements: 15 } });
+  });
+
+  it('puts every lost and every added bracket in exactly one kind', () => {
+    const trip = new BracketRoundTrip(
+      { heads: loadHeadTable('en-content'), traces: 'surface', coordination: 'first', punctuation: 'phrase' },
+      { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
+    );
+    read(readFileSync(demo, 'utf8')).trees.forEach((tree) => trip.add(tree, tree.id!));
+    const report = trip.report();
+    const { gold, test, matched } = report.counts!;
+    const { unary, nesting, punctuation, other } = report.losses;
+    expect(unary + nesting + punctuation + other).toBe(gold - matched + (test - matched));
+  });
+
+  it('reports dependencies → brackets → dependencies as exact for CoNLL-U input', async () => {
+    const { code, stdout } = await cli(['roundtrip', '--json', join(projectRoot, 'test/fixtures/conllu/harbour.conllu')]);
+    expect(code).toBe(0);
+    expect(JSON.parse(stdout)).toMatchObject({ direction: 'dependencies', sentences: 3, exactMatch: 3, attachment: { uas: 1, las: 1 } });
+  });
+
+  it('fails a pipeline with exit 1 when a kind of loss passes its limit', async () => {
+    const over = await cli(['roundtrip', '--heads', 'en-content', demo, '--fail-above', 'nesting=10', 'wordsOrPos=0']);
+    expect(over.code).toBe(1);
+    expect(over.stderr).toMatch(/^treebridge: nesting losses \d+\.\d\d% exceed 10%\n$/);
+    const under = await cli(['roundtrip', '--heads', 'en-content', demo, '--fail-above', 'wordsOrPos=0']);
+    expect(under.code).toBe(0);
+    const wrong = await cli(['roundtrip', '--heads', 'en-content', demo, '--fail-above', 'colour=5']);
+    expect(wrong.code).toBe(2);
+  });
+});
