@@ -1,0 +1,34 @@
+// Round trips on the shared corpora: GUM (CC BY 4.0) with en-function and IcePaHC
+// (CC BY 4.0) with penn-historical, brackets → dependencies → brackets; the
+// figures go into the issue note. Words and tags never change, and the loss
+// table adds up.
+import { describe, expect, it } from 'vitest';
+import { BracketRoundTrip } from '../../src/evaluate/roundtrip.js';
+import { readBracketedFile } from '../../src/formats/bracketed/read-bracketed.js';
+import { loadCategoryTable } from '../../src/tables/load-category-table.js';
+import { loadHeadTable } from '../../src/tables/load-table.js';
+import { loadPosMap } from '../../src/tables/load-pos-map.js';
+import { corpusFiles } from '../support/corpora.js';
+
+describe.each([
+  ['GUM with en-function', 'gum/const', '.ptb', 'en-function', false],
+  ['IcePaHC with penn-historical', 'icepahc', '.psd', 'penn-historical', true],
+] as const)('round trip of %s', (name, folder, extension, heads, lemmas) => {
+  it('changes no word and no tag, and puts every lost or added bracket in one kind', async () => {
+    const trip = new BracketRoundTrip(
+      { heads: loadHeadTable(heads), traces: 'surface', coordination: 'first', punctuation: 'phrase', upos: folder === 'gum/const' ? loadPosMap('en-ptb') : undefined },
+      { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
+    );
+    let n = 0;
+    for (const file of corpusFiles(folder, extension)) {
+      for await (const tree of readBracketedFile(file, { splitLemmas: lemmas }, () => undefined)) trip.add(tree, tree.id ?? String(++n));
+    }
+    const report = trip.report();
+    const { gold, test, matched } = report.counts!;
+    const b = report.brackets!;
+    console.log(`${name}: ${report.sentences} sentences, F1 ${b.f1.toFixed(4)}, labelled F1 ${b.labelledF1.toFixed(4)}; losses ${JSON.stringify(report.losses)}`);
+    expect(report.losses.wordsOrPos).toBe(0);
+    const { unary, nesting, punctuation, other } = report.losses;
+    expect(unary + nesting + punctuation + other).toBe(gold - matched + (test - matched));
+  });
+});
