@@ -91,6 +91,16 @@ console.log(`\nconversion of IcePaHC to CoNLL-U with penn-historical (read + con
 console.log(row('treebridge to-deps', megabytes, conversion) + `   (${Math.round(conversion.words / conversion.seconds).toLocaleString('en-US')} words/s)`);
 console.log(`conversion takes ${(conversion.seconds / reference.seconds).toFixed(2)}x the time NLTK takes only to read the same files (target: under 1)`);
 
+// Round trip: IcePaHC brackets → dependencies → brackets with penn-historical, scored.
+const roundRuns: Measure[] = [];
+for (let round = 0; round < rounds; round++) {
+  roundRuns.push(JSON.parse(execFileSync(process.execPath, [...nodeFlags, join(here, 'roundtrip-worker.js'), 'penn-historical', ...files], { encoding: 'utf8', maxBuffer: 1 << 24 })));
+}
+const roundTrip = fastest(roundRuns);
+console.log(`\nround trip of IcePaHC with penn-historical (read, to dependencies, back to brackets, scored; fastest of ${rounds}):`);
+console.log(row('treebridge roundtrip', megabytes, roundTrip));
+console.log(`round trip takes ${(roundTrip.seconds / reference.seconds).toFixed(2)}x the time NLTK takes only to read the same files`);
+
 // stats: structure analysis of every shared CoNLL-U file (GUM dep CC BY 4.0; UD EWT and CAC dev CC BY-SA 4.0).
 const conllu = ['gum/dep', 'ud'].flatMap((sub) =>
   readdirSync(join(corpora, sub)).filter((name) => name.endsWith('.conllu')).sort().map((name) => join(corpora, sub, name)),
