@@ -6,6 +6,7 @@ import { attachDependents, type PunctuationPolicy } from './attach-dependents.js
 import type { ConversionNode, WordNode } from './conversion-tree.js';
 import { findHeads } from './find-heads.js';
 import { oracleChooser } from './oracle-heads.js';
+import { BRACKETS_KEY, encodeBrackets } from './encode-brackets.js';
 import type { CoordinationStyle } from './handle-coordination.js';
 import { prepareTree, type TraceMode } from './prepare-tree.js';
 
@@ -20,6 +21,8 @@ export interface ConversionSettings {
   upos?: Map<string, string>;
   /** Gold heads of the words, to convert as the head-percolation oracle does (see oracle-heads). */
   oracle?: readonly number[];
+  /** Carry the bracketing in MISC and a comment, so that it comes back exactly (see encode-brackets). */
+  lossless?: boolean;
 }
 
 /** A converted tree: the CoNLL-U sentence, and the prepared tree with its heads, for explanations. */
@@ -64,5 +67,14 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
     lines,
     id,
   };
+  if (settings.lossless) {
+    const encoded = encodeBrackets(tree, settings);
+    if (encoded) {
+      sentence.comments.push({ type: 'comment', text: ` brackets = ${encoded.sentence}` });
+      lines.forEach((line, i) => {
+        if (encoded.words[i]) line.misc += `|${BRACKETS_KEY}=${encoded.words[i]}`;
+      });
+    }
+  }
   return { sentence, root, words };
 }

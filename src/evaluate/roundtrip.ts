@@ -2,6 +2,8 @@ import { convertTree, type ConversionSettings } from '../convert/convert-tree.js
 import type { ConstituentNode, Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
+import { decodeBrackets } from '../reverse/decode-brackets.js';
+import { writeTree } from '../formats/bracketed/write-bracketed.js';
 import type { HeadTable } from '../tables/table-model.js';
 import { AttachmentScorer } from './score-attachments.js';
 import { bracketScores, emptyTotals, scoreBrackets, type BracketTotals, type Span } from './parseval.js';
@@ -88,16 +90,16 @@ export class BracketRoundTrip {
   add(tree: Tree, id: string): Tree | undefined {
     const dependencies = convertTree(tree, this.conversion, id, id);
     if (!dependencies) return undefined;
-    const rebuilt = buildBrackets(dependencies.sentence, this.bracketing);
+    const carried = this.conversion.lossless ? decodeBrackets(dependencies.sentence) : undefined;
+    const rebuilt = carried ? { tree: carried } : buildBrackets(dependencies.sentence, this.bracketing);
     if (!rebuilt) return undefined;
+    if (carried && writeTree(carried) !== writeTree(tree)) this.note('other', id);
     const gold = spansOf(tree);
     const test = spansOf(rebuilt.tree);
     scoreBrackets(this.totals, gold.spans, test.spans);
-    const note = (kind: LossKind, count = 1) => {
-      if (count <= 0) return;
-      this.losses[kind] += count;
-      if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
-    };
+    // In lossless mode the tree itself must come back: function tags, empty elements and coindices are then not lost.
+    if (carried) return rebuilt.tree;
+    const note = (kind: LossKind, count = 1) => this.note(kind, id, count);
     this.classify(gold.spans, test.spans, gold.words, this.conversion.heads, note);
     // Same span on both sides, different category.
     const labelOf = (spans: Span[]) => new Map(spans.map((s) => [`${s.start}:${s.end}`, s.label]));
@@ -111,6 +113,12 @@ export class BracketRoundTrip {
     const differing = gold.words.filter((w, i) => w.form !== test.words[i]?.form || w.pos !== test.words[i]?.pos).length + Math.abs(gold.words.length - test.words.length);
     note('wordsOrPos', differing);
     return rebuilt.tree;
+  }
+
+  private note(kind: LossKind, id: string, count = 1): void {
+    if (count <= 0) return;
+    this.losses[kind] += count;
+    if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
   }
 
   /** Every lost and every added bracket goes to exactly one of unary, punctuation, nesting. */

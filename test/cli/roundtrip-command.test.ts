@@ -49,3 +49,26 @@ describe('treebridge roundtrip', () => {
     expect(wrong.code).toBe(2);
   });
 });
+
+describe('lossless mode', () => {
+  it('carries each bracketing through to-deps --lossless and back through to-brackets --lossless exactly', async () => {
+    for (const [file, extra] of [
+      ['harbour.psd', ['--heads', 'en-content']],
+      ['ferry-log.psd', ['--heads', 'penn-historical', '--lemmas']],
+    ] as const) {
+      const path = join(projectRoot, 'demo-data', file);
+      const deps = await cli(['to-deps', '--lossless', ...extra, path]);
+      expect((await cli(['validate', '--from', 'conllu', '-'], { stdin: deps.stdout })).code, file).toBe(0);
+      const back = await cli(['to-brackets', '--lossless', '-'], { stdin: deps.stdout });
+      const original = await cli(['rewrite', ...(extra.includes('--lemmas') ? ['--lemmas'] : []), path]);
+      // Trees without words (a heading, a note) cannot be sentences: they are reported by to-deps and left out.
+      const kept = original.stdout.split('\n').filter((line) => line && /\(\w+ [^()]+\)/.test(line.replace(/\((CODE|ID|META) [^()]*\)/g, '')));
+      expect(back.stdout.trimEnd().split('\n'), file).toEqual(kept);
+    }
+  });
+
+  it('reports the round trip as exact', async () => {
+    const { stdout } = await cli(['roundtrip', '--json', '--lossless', '--heads', 'en-content', demo]);
+    expect(JSON.parse(stdout)).toMatchObject({ sentences: 25, exactMatch: 25, brackets: { f1: 1, labelledF1: 1 }, losses: { other: 0 } });
+  });
+});

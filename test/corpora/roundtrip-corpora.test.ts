@@ -9,6 +9,7 @@ import { loadCategoryTable } from '../../src/tables/load-category-table.js';
 import { loadHeadTable } from '../../src/tables/load-table.js';
 import { loadPosMap } from '../../src/tables/load-pos-map.js';
 import { corpusFiles } from '../support/corpora.js';
+import { writeTree } from '../../src/formats/bracketed/write-bracketed.js';
 
 describe.each([
   ['GUM with en-function', 'gum/const', '.ptb', 'en-function', false],
@@ -30,5 +31,32 @@ describe.each([
     expect(report.losses.wordsOrPos).toBe(0);
     const { unary, nesting, punctuation, other } = report.losses;
     expect(unary + nesting + punctuation + other).toBe(gold - matched + (test - matched));
+  });
+});
+
+describe.each([
+  ['GUM with en-content', 'gum/const', '.ptb', 'en-content', false],
+  ['IcePaHC with penn-historical', 'icepahc', '.psd', 'penn-historical', true],
+] as const)('lossless round trip of %s', (name, folder, extension, heads, lemmas) => {
+  it('gives back every tree with words exactly: function tags, empty elements and coindices included', async () => {
+    const trip = new BracketRoundTrip(
+      { heads: loadHeadTable(heads), traces: 'surface', coordination: 'first', punctuation: 'phrase', lossless: true },
+      { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
+    );
+    let trees = 0;
+    let withWords = 0;
+    let exact = 0;
+    for (const file of corpusFiles(folder, extension)) {
+      for await (const tree of readBracketedFile(file, { splitLemmas: lemmas }, () => undefined)) {
+        trees++;
+        const back = trip.add(tree, tree.id ?? String(trees));
+        if (!back) continue;
+        withWords++;
+        if (writeTree(back) === writeTree(tree)) exact++;
+      }
+    }
+    console.log(`${name}, lossless: ${exact} of ${withWords} trees with words exact (${trees - withWords} trees without words cannot be sentences)`);
+    expect(exact).toBe(withWords);
+    expect(trip.report().losses.other).toBe(0);
   });
 });

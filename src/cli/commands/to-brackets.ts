@@ -3,6 +3,7 @@ import { diagnose } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import { writeTree, type Layout } from '../../formats/bracketed/write-bracketed.js';
 import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
+import { decodeBrackets } from '../../reverse/decode-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
 import { ProblemPrinter } from '../print-problems.js';
@@ -20,6 +21,7 @@ export function registerToBrackets(program: Command, io: CliIO, done: (result: C
     .addOption(new Option('--pos <column>', 'the column that gives the part-of-speech brackets').choices(['upos', 'xpos']).default('upos'))
     .addOption(new Option('--layout <layout>', 'line: one tree per line; indented').choices(['line', 'indented']).default('line'))
     .option('--lifts', 'report each sentence with lifted arcs on standard error')
+    .option('--lossless', 'rebuild the bracketing carried by to-deps --lossless exactly, where a sentence carries one')
     .option('-o, --output <file>', 'write the bracketed trees to a file (default: standard output)')
     .action(async (files: string[], options: Record<string, unknown>) => done(await toBrackets(files, options, io)));
 }
@@ -43,7 +45,8 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   try {
     for await (const sentence of readSentencesOf(inputs, report, io)) {
       read++;
-      const result = buildBrackets(sentence, settings);
+      const carried = options.lossless === true ? decodeBrackets(sentence) : undefined;
+      const result = carried ? { tree: carried, lifts: [] } : buildBrackets(sentence, settings);
       if (!result) {
         if (sentence.source && sentence.position) {
           report(diagnose('not-a-tree', 'the heads of this sentence do not form a tree; skipped', { file: sentence.file ?? '-', offset: sentence.position.start, lines: sentence.source }));
