@@ -60,7 +60,7 @@ describe('lossless mode', () => {
       const deps = await cli(['to-deps', '--lossless', ...extra, path]);
       expect((await cli(['validate', '--from', 'conllu', '-'], { stdin: deps.stdout })).code, file).toBe(0);
       const back = await cli(['to-brackets', '--lossless', '-'], { stdin: deps.stdout });
-      const original = await cli(['rewrite', ...(extra.includes('--lemmas') ? ['--lemmas'] : []), path]);
+      const original = await cli(['rewrite', ...((extra as readonly string[]).includes('--lemmas') ? ['--lemmas'] : []), path]);
       // Trees without words (a heading, a note) cannot be sentences: they are reported by to-deps and left out.
       const kept = original.stdout.split('\n').filter((line) => line && /\(\w+ [^()]+\)/.test(line.replace(/\((CODE|ID|META) [^()]*\)/g, '')));
       expect(back.stdout.trimEnd().split('\n'), file).toEqual(kept);
