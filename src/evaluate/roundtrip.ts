@@ -12,6 +12,34 @@ import { bracketScores, emptyTotals, scoreBrackets, type BracketTotals, type Spa
 export const lossKinds = ['unary', 'nesting', 'label', 'functionTags', 'emptyElements', 'coindexing', 'punctuation', 'wordsOrPos', 'other'] as const;
 export type LossKind = (typeof lossKinds)[number];
 
+/** A sentence kept for the report, in either direction. */
+export type RoundTripSample = BracketSample | DependencySample;
+
+/** Brackets direction: the trees there and back, the dependencies between, what differs. */
+export interface BracketSample {
+  direction: 'brackets';
+  id: string;
+  kinds: LossKind[];
+  original: Tree;
+  dependencies: DependencySentence;
+  rebuilt: Tree;
+  /** Spans (`start:end`) lost from the original, and added in the rebuilt tree. */
+  lost: Set<string>;
+  added: Set<string>;
+}
+
+/** Dependencies direction: the sentence there and back, the bracketing between, what differs. */
+export interface DependencySample {
+  direction: 'dependencies';
+  id: string;
+  kinds: LossKind[];
+  original: DependencySentence;
+  rebuilt: Tree;
+  back: DependencySentence;
+  /** Word numbers (1-based) whose head or relation came back different. */
+  changed: Set<number>;
+}
+
 /** Totals of a round trip over a corpus. */
 export interface RoundTripReport {
   direction: 'brackets' | 'dependencies';
@@ -80,11 +108,14 @@ export class BracketRoundTrip {
   private readonly totals: BracketTotals = emptyTotals();
   private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
   private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
+  /** Sentences kept for drawing, at most `samplesPerKind` for each kind. */
+  readonly samples: RoundTripSample[] = [];
 
   constructor(
     private readonly conversion: ConversionSettings,
     private readonly bracketing: BracketSettings,
     private readonly maxExamples = 5,
+    private readonly samplesPerKind = 0,
   ) {}
 
   add(tree: Tree, id: string): Tree | undefined {
@@ -99,6 +130,7 @@ export class BracketRoundTrip {
     scoreBrackets(this.totals, gold.spans, test.spans);
     // In lossless mode the tree itself must come back: function tags, empty elements and coindices are then not lost.
     if (carried) return rebuilt.tree;
+    const before = { ...this.losses };
     const note = (kind: LossKind, count = 1) => this.note(kind, id, count);
     this.classify(gold.spans, test.spans, gold.words, this.conversion.heads, note);
     // Same span on both sides, different category.
@@ -112,7 +144,21 @@ export class BracketRoundTrip {
     note('coindexing', countNodes(tree, (n) => (n.type === 'phrase' || n.type === 'empty') && (n.label.coindex !== undefined || n.label.gapIndex !== undefined)));
     const differing = gold.words.filter((w, i) => w.form !== test.words[i]?.form || w.pos !== test.words[i]?.pos).length + Math.abs(gold.words.length - test.words.length);
     note('wordsOrPos', differing);
+    this.keepSample(id, tree, dependencies.sentence, rebuilt.tree, gold.spans, test.spans, before);
     return rebuilt.tree;
+  }
+
+  private keepSample(id: string, original: Tree, dependencies: DependencySentence, rebuilt: Tree, gold: Span[], test: Span[], before: Record<LossKind, number>): void {
+    if (this.samplesPerKind === 0) return;
+    const kinds = lossKinds.filter((kind) => this.losses[kind] > before[kind]);
+    const wanted = kinds.filter((kind) => this.samples.filter((s) => s.kinds.includes(kind)).length < this.samplesPerKind);
+    if (wanted.length === 0) return;
+    const key = (s: Span) => `${s.start}:${s.end}`;
+    const testKeys = new Set(test.map(key));
+    const goldKeys = new Set(gold.map(key));
+    const lost = new Set(gold.map(key).filter((k) => !testKeys.has(k)));
+    const added = new Set(test.map(key).filter((k) => !goldKeys.has(k)));
+    this.samples.push({ direction: 'brackets', id, kinds, original, dependencies, rebuilt, lost, added });
   }
 
   private note(kind: LossKind, id: string, count = 1): void {
@@ -183,10 +229,14 @@ export class DependencyRoundTrip {
   private sentences = 0;
   private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
   private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
+  /** Sentences kept for drawing, at most `samplesPerKind` for each kind. */
+  readonly samples: DependencySample[] = [];
 
   constructor(
     private readonly bracketing: BracketSettings,
     private readonly conversion: ConversionSettings,
+    private readonly maxExamples = 5,
+    private readonly samplesPerKind = 0,
   ) {}
 
   add(sentence: DependencySentence, id: string): void {
@@ -194,22 +244,31 @@ export class DependencyRoundTrip {
     const rebuilt = buildBrackets(sentence, this.bracketing);
     const back = rebuilt && convertTree(rebuilt.tree, { ...this.conversion, traces: 'restore' }, id, id);
     if (!back) {
-      this.losses.other++;
-      if (this.examples.other.length < 5) this.examples.other.push(id);
+      this.note('other', id);
       return;
     }
     const before = this.scorer.score.labelsRight;
     const words = sentence.lines.filter((l) => l.type === 'word').length;
     if (!this.scorer.add(back.sentence, sentence)) {
-      this.losses.wordsOrPos++;
-      if (this.examples.wordsOrPos.length < 5) this.examples.wordsOrPos.push(id);
+      this.note('wordsOrPos', id);
       return;
     }
-    if (this.scorer.score.labelsRight - before === words) this.exact++;
-    else {
-      this.losses.other += words - (this.scorer.score.labelsRight - before);
-      if (this.examples.other.length < 5) this.examples.other.push(id);
+    if (this.scorer.score.labelsRight - before === words) {
+      this.exact++;
+      return;
     }
+    this.note('other', id, words - (this.scorer.score.labelsRight - before));
+    if (this.samples.length < this.samplesPerKind) {
+      const relations = (s: DependencySentence) => new Map(s.lines.filter((l) => l.type === 'word').map((l) => [l.id, `${l.head}:${l.deprel}`]));
+      const there = relations(sentence);
+      const changed = new Set([...relations(back.sentence)].filter(([word, arc]) => there.get(word) !== arc).map(([word]) => Number(word)));
+      this.samples.push({ direction: 'dependencies', id, kinds: ['other'], original: sentence, rebuilt: rebuilt.tree, back: back.sentence, changed });
+    }
+  }
+
+  private note(kind: LossKind, id: string, count = 1): void {
+    this.losses[kind] += count;
+    if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
   }
 
   report(): RoundTripReport {

@@ -1,5 +1,6 @@
 import { Option, type Command } from 'commander';
-import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport } from '../../evaluate/roundtrip.js';
+import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport, type RoundTripSample } from '../../evaluate/roundtrip.js';
+import { writeReport } from '../../report/write-report.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
@@ -22,6 +23,8 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .option('--json', 'print the report as JSON')
     .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser((v) => Number.parseInt(v, 10)))
     .option('--fail-above <limits...>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); kinds: ' + lossKinds.join(', '))
+    .option('--report <file>', 'also write an HTML page drawing the sentences with losses, original and back side by side')
+    .addOption(new Option('--report-limit <n>', 'sentences drawn per kind of loss in the HTML page').default(20).argParser((v) => Number.parseInt(v, 10)))
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await roundtrip(files, options, io)));
@@ -43,27 +46,32 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   }
   const problems = new ProblemPrinter(io);
   let report: RoundTripReport;
+  let samples: RoundTripSample[] = [];
   if (format === 'bracketed') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to go to dependencies: --heads NAME'] };
     const settings = conversionSettings(options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number);
+    const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
+    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn);
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       number++;
       trip.add(tree, tree.id ?? `${tree.file}-${number}`);
     }
     report = trip.report();
+    samples = trip.samples;
   } else {
     const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'restore', coordination: 'table' });
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings);
+    const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
+    const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn);
     let number = 0;
     for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
       number++;
       trip.add(sentence, sentence.id ?? `${sentence.file}-${number}`);
     }
     report = trip.report();
+    samples = trip.samples;
   }
   const output = Output.to(options.output as string | undefined, io);
   try {
@@ -72,6 +80,16 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   } catch (error) {
     await output.abandon();
     throw error;
+  }
+  if (typeof options.report === 'string') {
+    const page = Output.to(options.report, io);
+    try {
+      await page.write(writeReport(report, samples, options.reportLimit as number));
+      await page.commit();
+    } catch (error) {
+      await page.abandon();
+      throw error;
+    }
   }
   const exceeded = Object.entries(limits).filter(([kind, limit]) => share(report, kind as LossKind) > limit!);
   for (const [kind, limit] of exceeded) io.stderr.write(`treebridge: ${kind} losses ${share(report, kind as LossKind).toFixed(2)}% exceed ${limit}%\n`);

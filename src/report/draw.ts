@@ -1,0 +1,132 @@
+/**
+ * Drawings for the round-trip report, as SVG strings. A bracketing is drawn
+ * as a span chart: each phrase a bar over exactly the words it spans, stacked
+ * by depth above the row of words. A dependency tree is drawn as arcs above
+ * the row of words, from each head to its dependent; arcs that cross are
+ * dashed. Every corpus string is escaped.
+ */
+import type { ConstituentNode, Tree } from '../model/constituency.js';
+import { formatLabel } from '../model/label.js';
+
+export function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}
+
+interface Box {
+  x: number;
+  width: number;
+}
+
+const CHAR = 7.2;
+const GAP = 8;
+const ROW = 22;
+/** Width of one character of a phrase label (11px monospace). */
+const LABEL_CHAR = 6.7;
+
+/** Word boxes side by side, widths by text length. */
+function layoutWords(words: string[]): { boxes: Box[]; width: number } {
+  let x = 0;
+  const boxes = words.map((word) => {
+    const width = Math.max(28, word.length * CHAR + 12);
+    const box = { x, width };
+    x += width + GAP;
+    return box;
+  });
+  return { boxes, width: Math.max(x - GAP, 1) };
+}
+
+function wordRow(words: string[], tags: string[], boxes: Box[], y: number): string {
+  return words
+    .map((word, i) => {
+      const { x, width } = boxes[i]!;
+      return (
+        `<rect class="word" x="${x}" y="${y}" width="${width}" height="${ROW + 14}" rx="4"/>` +
+        `<text class="form" x="${x + width / 2}" y="${y + 15}">${escapeHtml(word)}</text>` +
+        `<text class="tag" x="${x + width / 2}" y="${y + 30}">${escapeHtml(tags[i] ?? '')}</text>`
+      );
+    })
+    .join('');
+}
+
+/** A phrase to draw: its label, word span and level above the words. */
+interface Bar {
+  label: string;
+  start: number;
+  end: number;
+  level: number;
+}
+
+/** The span chart of a bracketing; `marked` spans (`start:end`) are drawn as lost or added. */
+export function drawBracketing(tree: Tree, marked: ReadonlySet<string>, markClass: 'lost' | 'added'): string {
+  const words: string[] = [];
+  const tags: string[] = [];
+  const bars: Bar[] = [];
+  const visit = (node: ConstituentNode): { start: number; end: number; level: number } | undefined => {
+    if (node.type === 'preterminal') {
+      words.push(node.word.form);
+      tags.push(node.pos);
+      return { start: words.length - 1, end: words.length, level: 0 };
+    }
+    if (node.type !== 'phrase') return undefined;
+    let start = Infinity;
+    let end = -Infinity;
+    let level = 0;
+    for (const child of node.children) {
+      const span = visit(child);
+      if (!span) continue;
+      start = Math.min(start, span.start);
+      end = Math.max(end, span.end);
+      level = Math.max(level, span.level);
+    }
+    if (start === Infinity) return undefined;
+    bars.push({ label: formatLabel(node.label), start, end, level: level + 1 });
+    return { start, end, level: level + 1 };
+  };
+  tree.children.forEach(visit);
+  const { boxes, width } = layoutWords(words);
+  const levels = Math.max(0, ...bars.map((b) => b.level));
+  const top = levels * ROW;
+  const rects = bars
+    .map((bar) => {
+      const x = boxes[bar.start]!.x;
+      const right = boxes[bar.end - 1]!.x + boxes[bar.end - 1]!.width;
+      const y = top - bar.level * ROW + 2;
+      const cls = marked.has(`${bar.start}:${bar.end}`) ? `bar ${markClass}` : 'bar';
+      const label = escapeHtml(bar.label);
+      // A label wider than its bar is squeezed to fit; the whole label stays readable on hover.
+      const room = right - x - 8;
+      const fit = bar.label.length * LABEL_CHAR > room ? ` textLength="${room}" lengthAdjust="spacingAndGlyphs"` : '';
+      return `<g><title>${label}</title><rect class="${cls}" x="${x}" y="${y}" width="${right - x}" height="${ROW - 4}" rx="3"/><text class="label" x="${x + 4}" y="${y + 13}"${fit}>${label}</text></g>`;
+    })
+    .join('');
+  const height = top + ROW + 16;
+  return `<svg class="bracketing" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${rects}${wordRow(words, tags, boxes, top)}</svg>`;
+}
+
+/**
+ * Arcs over words: `heads[i]` is the head of word i+1 (0: root); `crossing` names
+ * dependents whose arc is non-projective, `changed` those whose arc differs from
+ * the other side of a round trip.
+ */
+export function drawDependencies(words: string[], tags: string[], heads: number[], relations: string[], crossing: ReadonlySet<number>, changed: ReadonlySet<number> = new Set()): string {
+  const { boxes, width } = layoutWords(words);
+  const centre = (i: number) => boxes[i - 1]!.x + boxes[i - 1]!.width / 2;
+  const tallest = Math.max(1, ...heads.map((h, i) => (h === 0 ? 0 : Math.abs(h - (i + 1)))));
+  const top = Math.min(tallest, 12) * 14 + 24;
+  const arcs = heads
+    .map((head, i) => {
+      if (head === 0) return '';
+      const from = centre(head);
+      const to = centre(i + 1);
+      const rise = Math.min(Math.abs(head - (i + 1)), 12) * 14 + 10;
+      const cls = ['arc', crossing.has(i + 1) ? 'crossing' : '', changed.has(i + 1) ? 'changed' : ''].filter(Boolean).join(' ');
+      return (
+        `<path class="${cls}" d="M ${from} ${top} C ${from} ${top - rise}, ${to} ${top - rise}, ${to} ${top - 2}" marker-end="url(#tip)"/>` +
+        `<text class="relation" x="${(from + to) / 2}" y="${top - rise * 0.75 - 2}">${escapeHtml(relations[i] ?? '')}</text>`
+      );
+    })
+    .join('');
+  const height = top + ROW + 16;
+  const marker = '<defs><marker id="tip" viewBox="0 0 6 6" refX="5" refY="3" markerWidth="6" markerHeight="6" orient="auto"><path d="M0,0 L6,3 L0,6 z" class="tip"/></marker></defs>';
+  return `<svg class="dependencies" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${marker}${arcs}${wordRow(words, tags, boxes, top)}</svg>`;
+}
