@@ -2,7 +2,8 @@ import { convertTree, type ConversionSettings } from '../convert/convert-tree.js
 import type { ConstituentNode, Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
-import { decodeBrackets } from '../reverse/decode-brackets.js';
+import { decodeBrackets, decodeCarriedTrees } from '../reverse/decode-brackets.js';
+import { carryComment } from '../convert/carry-wordless-trees.js';
 import { writeTree } from '../formats/bracketed/write-bracketed.js';
 import type { HeadTable } from '../tables/table-model.js';
 import { AttachmentScorer } from './score-attachments.js';
@@ -120,7 +121,7 @@ export class BracketRoundTrip {
 
   add(tree: Tree, id: string): Tree | undefined {
     const dependencies = convertTree(tree, this.conversion, id, id);
-    if (!dependencies) return undefined;
+    if (!dependencies) return this.conversion.lossless ? this.carryWordless(tree, id) : undefined;
     const carried = this.conversion.lossless ? decodeBrackets(dependencies.sentence) : undefined;
     const rebuilt = carried ? { tree: carried } : buildBrackets(dependencies.sentence, this.bracketing);
     if (!rebuilt) return undefined;
@@ -146,6 +147,16 @@ export class BracketRoundTrip {
     note('wordsOrPos', differing);
     this.keepSample(id, tree, dependencies.sentence, rebuilt.tree, gold.spans, test.spans, before);
     return rebuilt.tree;
+  }
+
+  /** Lossless mode: a tree without words rides in a comment (see carry-wordless-trees) and must come back whole. */
+  private carryWordless(tree: Tree, id: string): Tree | undefined {
+    const carrier: DependencySentence = { type: 'dependency-sentence', comments: [carryComment(tree, 'before')], lines: [], file: tree.file };
+    const [back] = decodeCarriedTrees(carrier, 'before');
+    this.totals.sentences++;
+    if (back && writeTree(back) === writeTree(tree)) this.totals.exact++;
+    else this.note('other', id);
+    return back;
   }
 
   private keepSample(id: string, original: Tree, dependencies: DependencySentence, rebuilt: Tree, gold: Span[], test: Span[], before: Record<LossKind, number>): void {

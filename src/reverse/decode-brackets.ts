@@ -3,6 +3,7 @@ import type { ConstituentNode, Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { parseLabel } from '../model/label.js';
 import { BRACKETS_KEY } from '../convert/encode-brackets.js';
+import { carriedTexts, type CarrySide } from '../convert/carry-wordless-trees.js';
 
 const unescape = (text: string) => text.replace(/%([0-9a-f]{2})/g, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
 
@@ -53,4 +54,9 @@ export function decodeBrackets(sentence: DependencySentence): Tree | undefined {
   const top = topField.slice(4).split(',').map(item).filter((n): n is ConstituentNode => n !== undefined);
   const wrapper = wrapperField.startsWith('wrapper=') ? { label: unescape(wrapperField.slice(8)) } : undefined;
   return { type: 'tree', wrapper, children: top, id: hasId ? sentence.id : undefined, idPosition: undefined, position: undefined, file: sentence.file, source: undefined };
+}
+
+/** The trees without words that lossless mode carried on one side of a sentence (see carry-wordless-trees). */
+export function decodeCarriedTrees(sentence: DependencySentence, side: CarrySide): Tree[] {
+  return carriedTexts(sentence.comments, side).flatMap((text) => readBracketedText(text, {}, () => undefined).map((tree) => ({ ...tree, position: undefined, source: undefined, idPosition: undefined, file: sentence.file })));
 }

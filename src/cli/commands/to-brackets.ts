@@ -3,7 +3,7 @@ import { diagnose } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import { writeTree, type Layout } from '../../formats/bracketed/write-bracketed.js';
 import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
-import { decodeBrackets } from '../../reverse/decode-brackets.js';
+import { decodeBrackets, decodeCarriedTrees } from '../../reverse/decode-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
 import { ProblemPrinter } from '../print-problems.js';
@@ -42,6 +42,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   let written = 0;
   let lifted = 0;
   let liftedSentences = 0;
+  let restored = 0;
   try {
     for await (const sentence of readSentencesOf(inputs, report, io)) {
       read++;
@@ -62,14 +63,18 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
           io.stderr.write(`${sentence.id ?? `sentence ${read}`}: lifted ${arcs}\n`);
         }
       }
-      await output.write(writeTree(result.tree, { layout: options.layout as Layout }));
+      const layout = { layout: options.layout as Layout };
+      const before = carried ? decodeCarriedTrees(sentence, 'before') : [];
+      const after = carried ? decodeCarriedTrees(sentence, 'after') : [];
+      restored += before.length + after.length;
+      for (const tree of [...before, result.tree, ...after]) await output.write(writeTree(tree, layout));
     }
     await output.commit();
   } catch (error) {
     await output.abandon();
     throw error;
   }
-  io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}\n`);
+  io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}${restored > 0 ? `; ${restored} tree${restored === 1 ? '' : 's'} without words restored from comments` : ''}\n`);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

@@ -1,6 +1,9 @@
 import { basename } from 'node:path';
 import type { Command } from 'commander';
 import { convertTree } from '../../convert/convert-tree.js';
+import { carryComment } from '../../convert/carry-wordless-trees.js';
+import type { Tree } from '../../model/constituency.js';
+import type { DependencySentence } from '../../model/dependency.js';
 import { diagnose } from '../../diagnostics/diagnostic.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
@@ -30,7 +33,17 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   let read = 0;
   let converted = 0;
   let skipped = 0;
+  let carried = 0;
   let treeInFile = 0;
+  // Lossless mode holds back one sentence, so that trees without words at the very end can ride on it.
+  let held: DependencySentence | undefined;
+  let wordless: Tree[] = [];
+  const skip = (tree: Tree) => {
+    skipped++;
+    if (tree.source && tree.position) {
+      report(diagnose('nothing-to-convert', 'tree has no words (only empty elements or notes); skipped', { file: tree.file ?? '-', offset: tree.position.start, lines: tree.source }));
+    }
+  };
   try {
     const trees = readTreesOf(inputs, bracketedReadOptions(options), report, io, () => (treeInFile = 0));
     for await (const tree of trees) {
@@ -40,22 +53,33 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
       const id = tree.id ?? `${basename(file)}-${treeInFile}`;
       const conversion = convertTree(tree, settings, id, `${basename(file)}#${treeInFile}`);
       if (!conversion) {
-        skipped++;
-        if (tree.source && tree.position) {
-          report(diagnose('nothing-to-convert', 'tree has no words (only empty elements or notes); skipped', { file, offset: tree.position.start, lines: tree.source }));
-        }
+        if (settings.lossless) wordless.push(tree);
+        else skip(tree);
         continue;
       }
       converted++;
-      await output.write(writeSentence(conversion.sentence));
+      if (!settings.lossless) {
+        await output.write(writeSentence(conversion.sentence));
+        continue;
+      }
+      if (held) await output.write(writeSentence(held));
+      held = conversion.sentence;
+      held.comments.push(...wordless.map((t) => carryComment(t, 'before')));
+      carried += wordless.length;
+      wordless = [];
     }
+    if (held) {
+      held.comments.push(...wordless.map((t) => carryComment(t, 'after')));
+      carried += wordless.length;
+      await output.write(writeSentence(held));
+    } else wordless.forEach(skip);
     await output.commit();
   } catch (error) {
     await output.abandon();
     throw error;
   }
   const notRead = problems.errors > 0 ? `; ${problems.errors} problem${problems.errors === 1 ? '' : 's'} kept trees from being read (above)` : '';
-  io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read: ${converted} converted, ${skipped} skipped${notRead}\n`);
+  io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read: ${converted} converted, ${carried > 0 ? `${carried} without words carried in comments, ` : ''}${skipped} skipped${notRead}\n`);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
