@@ -62,12 +62,17 @@ interface Word {
   form: string;
 }
 
-/** The brackets of a tree as spans over its words (empty elements and notes left out), with its words. */
-export function spansOf(tree: Tree): { spans: Array<Span & { functions: number }>; words: Word[] } {
+/**
+ * The brackets of a tree as spans over its words (empty elements and notes left
+ * out), with its words; words that `leaveOut` names (punctuation, when scores
+ * ignore it) are left out too.
+ */
+export function spansOf(tree: Tree, leaveOut?: (pos: string) => boolean): { spans: Array<Span & { functions: number }>; words: Word[] } {
   const words: Word[] = [];
   const spans: Array<Span & { functions: number }> = [];
   const visit = (node: ConstituentNode): [number, number] | undefined => {
     if (node.type === 'preterminal') {
+      if (leaveOut?.(node.pos)) return undefined;
       const index = words.length;
       words.push({ index, pos: node.pos, form: node.word.form });
       return [index, index + 1];
@@ -117,6 +122,8 @@ export class BracketRoundTrip {
     private readonly bracketing: BracketSettings,
     private readonly maxExamples = 5,
     private readonly samplesPerKind = 0,
+    /** False: punctuation words are left out of the spans before scoring (common practice). */
+    private readonly countPunctuation = true,
   ) {}
 
   add(tree: Tree, id: string): Tree | undefined {
@@ -126,8 +133,9 @@ export class BracketRoundTrip {
     const rebuilt = carried ? { tree: carried } : buildBrackets(dependencies.sentence, this.bracketing);
     if (!rebuilt) return undefined;
     if (carried && writeTree(carried) !== writeTree(tree)) this.note('other', id);
-    const gold = spansOf(tree);
-    const test = spansOf(rebuilt.tree);
+    const leaveOut = this.countPunctuation ? undefined : (pos: string) => this.conversion.heads.punctuation({ category: pos, functions: [] });
+    const gold = spansOf(tree, leaveOut);
+    const test = spansOf(rebuilt.tree, leaveOut);
     scoreBrackets(this.totals, gold.spans, test.spans);
     // In lossless mode the tree itself must come back: function tags, empty elements and coindices are then not lost.
     if (carried) return rebuilt.tree;
@@ -235,7 +243,7 @@ export class BracketRoundTrip {
 
 /** Dependencies → brackets → dependencies, sentence by sentence: attachment scores and differences. */
 export class DependencyRoundTrip {
-  private readonly scorer = new AttachmentScorer(true);
+  private readonly scorer: AttachmentScorer;
   private exact = 0;
   private sentences = 0;
   private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
@@ -248,7 +256,11 @@ export class DependencyRoundTrip {
     private readonly conversion: ConversionSettings,
     private readonly maxExamples = 5,
     private readonly samplesPerKind = 0,
-  ) {}
+    /** False: words attached as punct are left out of UAS and LAS (common practice). */
+    countPunctuation = true,
+  ) {
+    this.scorer = new AttachmentScorer(countPunctuation);
+  }
 
   add(sentence: DependencySentence, id: string): void {
     this.sentences++;
@@ -259,16 +271,17 @@ export class DependencyRoundTrip {
       return;
     }
     const before = this.scorer.score.labelsRight;
-    const words = sentence.lines.filter((l) => l.type === 'word').length;
+    const wordsBefore = this.scorer.score.words;
     if (!this.scorer.add(back.sentence, sentence)) {
       this.note('wordsOrPos', id);
       return;
     }
-    if (this.scorer.score.labelsRight - before === words) {
+    const scored = this.scorer.score.words - wordsBefore;
+    if (this.scorer.score.labelsRight - before === scored) {
       this.exact++;
       return;
     }
-    this.note('other', id, words - (this.scorer.score.labelsRight - before));
+    this.note('other', id, scored - (this.scorer.score.labelsRight - before));
     if (this.samples.length < this.samplesPerKind) {
       const relations = (s: DependencySentence) => new Map(s.lines.filter((l) => l.type === 'word').map((l) => [l.id, `${l.head}:${l.deprel}`]));
       const there = relations(sentence);

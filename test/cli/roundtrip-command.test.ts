@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { BracketRoundTrip } from '../../src/evaluate/roundtrip.js';
+import { BracketRoundTrip, spansOf } from '../../src/evaluate/roundtrip.js';
 import { loadCategoryTable } from '../../src/tables/load-category-table.js';
 import { loadHeadTable } from '../../src/tables/load-table.js';
 import { cli } from '../support/cli.js';
@@ -37,6 +37,25 @@ describe('treebridge roundtrip', () => {
     const { code, stdout } = await cli(['roundtrip', '--json', join(projectRoot, 'test/fixtures/conllu/harbour.conllu')]);
     expect(code).toBe(0);
     expect(JSON.parse(stdout)).toMatchObject({ direction: 'dependencies', sentences: 3, exactMatch: 3, attachment: { uas: 1, las: 1 } });
+  });
+
+  it('leaves punctuation out of the spans when scores ignore it', () => {
+    const tree = read('( (S (NP-SBJ (NNS Gulls)) (VP (VBD circled)) (. .)))').trees[0]!;
+    const table = loadHeadTable('en-content');
+    const all = spansOf(tree);
+    const some = spansOf(tree, (pos) => table.punctuation({ category: pos, functions: [] }));
+    expect(all.words.map((w) => w.form)).toEqual(['Gulls', 'circled', '.']);
+    expect(some.words.map((w) => w.form)).toEqual(['Gulls', 'circled']);
+    expect(all.spans.find((s) => s.label === 'S')).toMatchObject({ start: 0, end: 3 });
+    expect(some.spans.find((s) => s.label === 'S')).toMatchObject({ start: 0, end: 2 });
+  });
+
+  it('scores the demo trees with punctuation counted or ignored, over the same sentences', async () => {
+    const counted = JSON.parse((await cli(['roundtrip', '--json', '--heads', 'en-content', demo])).stdout);
+    const ignored = JSON.parse((await cli(['roundtrip', '--json', '--score-punctuation', 'ignore', '--heads', 'en-content', demo])).stdout);
+    expect(ignored.sentences).toBe(counted.sentences);
+    expect(ignored.losses.punctuation).toBe(0);
+    expect(counted.losses.punctuation).toBeGreaterThan(0);
   });
 
   it('fails a pipeline with exit 1 when a kind of loss passes its limit', async () => {

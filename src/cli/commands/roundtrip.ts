@@ -20,6 +20,7 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .addOption(new Option('--from <format>', 'input format (default: by extension)').choices([...inputFormats]))
     .option('--categories <table>', 'category table for the rebuilt bracketings', 'ud')
     .addOption(new Option('--shape <shape>', 'shape of the rebuilt bracketings').choices(['flat', 'layered']).default('flat'))
+    .addOption(new Option('--score-punctuation <mode>', 'count punctuation in the scores, or ignore it (words the head table calls punctuation, or attached as punct)').choices(['count', 'ignore']).default('count'))
     .option('--json', 'print the report as JSON')
     .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser((v) => Number.parseInt(v, 10)))
     .option('--fail-above <limits...>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); kinds: ' + lossKinds.join(', '))
@@ -52,7 +53,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     const settings = conversionSettings(options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
     const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
-    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn);
+    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       number++;
@@ -64,7 +65,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'restore', coordination: 'table' });
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
     const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
-    const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn);
+    const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
     for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
       number++;
