@@ -13,7 +13,7 @@ export function addConversionOptions(command: Command, headsRequired = true): Co
     .addOption(new Option('--traces <mode>', 'surface: phrases attach where they stand; restore: antecedents of *T* *ICH* *EXP* *RNR* attach where their traces stand').choices(['surface', 'restore']).default('surface'))
     .addOption(new Option('--coordination <style>', 'which conjunct heads a coordination: first (as in UD), last, conjunction, or table (the head table decides)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
     .addOption(new Option('--punctuation <policy>', 'where punctuation attaches: phrase (to the head of its phrase) or root').choices(['phrase', 'root']).default('phrase'))
-    .option('--pos-map <map>', 'POS map giving UPOS from the tags: a name in headrules/ (en-ptb) or a path')
+    .option('--pos-map <map>', 'POS map giving UPOS from the tags: a name in headrules/ (en-ptb, penn-historical) or a path')
     .option('--lossless', 'carry each tree\'s bracketing in MISC (key Brackets) and a "# brackets" comment, so that to-brackets --lossless gives it back exactly');
 }
 

@@ -1,3 +1,4 @@
+import type { PosMap } from '../tables/load-pos-map.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import type { HeadTable, LabelTable } from '../tables/table-model.js';
@@ -18,7 +19,7 @@ export interface ConversionSettings {
   coordination: CoordinationStyle;
   punctuation: PunctuationPolicy;
   /** Universal POS by tag, when a POS map is given. */
-  upos?: Map<string, string>;
+  upos?: PosMap;
   /** Gold heads of the words, to convert as the head-percolation oracle does (see oracle-heads). */
   oracle?: readonly number[];
   /** Carry the bracketing in MISC and a comment, so that it comes back exactly (see encode-brackets). */

@@ -4,16 +4,37 @@ import { LineIndex } from '../model/line-index.js';
 import { resolveTable, TableError } from './load-table.js';
 
 /**
- * Reads a POS map (`headrules/NAME.pos`): one tag and its Universal POS tag
- * per line, `#` lines are comments. Returns tag → UPOS.
+ * Tag → UPOS. A tag written with a final `*` stands for every tag that starts
+ * with the rest (`NS-* NOUN` covers `NS-N`, `NS-G`, …); a tag written out whole
+ * wins over a pattern, and a longer pattern over a shorter one.
  */
-export function loadPosMap(nameOrPath: string): Map<string, string> {
+export class PosMap {
+  private readonly exact = new Map<string, string>();
+  private readonly prefixes: Array<[string, string]> = [];
+
+  add(tag: string, upos: string): void {
+    if (tag.endsWith('*')) {
+      this.prefixes.push([tag.slice(0, -1), upos]);
+      this.prefixes.sort((a, b) => b[0].length - a[0].length);
+    } else this.exact.set(tag, upos);
+  }
+
+  get(tag: string): string | undefined {
+    return this.exact.get(tag) ?? this.prefixes.find(([prefix]) => tag.startsWith(prefix))?.[1];
+  }
+}
+
+/**
+ * Reads a POS map (`headrules/NAME.pos`): one tag (or `PREFIX*`) and its
+ * Universal POS tag per line, `#` lines are comments.
+ */
+export function loadPosMap(nameOrPath: string): PosMap {
   const path = resolveTable(nameOrPath, 'pos' as 'heads');
   if (!path) {
     throw new TableError([{ code: 'table-not-found', severity: 'error', message: `no POS map "${nameOrPath}"`, file: nameOrPath, offset: 0, line: 1, column: 1 }]);
   }
   const text = readFileSync(path, 'utf8');
-  const map = new Map<string, string>();
+  const map = new PosMap();
   const lines = new LineIndex(text, { offset: 0, line: 1, column: 1 });
   let offset = 0;
   const problems = [];
@@ -23,7 +44,7 @@ export function loadPosMap(nameOrPath: string): Map<string, string> {
       const parts = trimmed.split(/\s+/);
       if (parts.length !== 2 || !/^[A-Z]+$/.test(parts[1]!)) {
         problems.push(diagnose('table-invalid', 'a POS map line is a tag and a Universal POS tag', { file: path, offset, lines }));
-      } else map.set(parts[0]!, parts[1]!);
+      } else map.add(parts[0]!, parts[1]!);
     }
     offset += line.length + 1;
   }

@@ -18,7 +18,7 @@ describe.each([
 ] as const)('round trip of %s', (name, folder, extension, heads, lemmas) => {
   it('changes no word and no tag, and puts every lost or added bracket in one kind', async () => {
     const trip = new BracketRoundTrip(
-      { heads: loadHeadTable(heads), traces: 'surface', coordination: 'first', punctuation: 'phrase', upos: folder === 'gum/const' ? loadPosMap('en-ptb') : undefined },
+      { heads: loadHeadTable(heads), traces: 'surface', coordination: 'first', punctuation: 'phrase', upos: loadPosMap(folder === 'gum/const' ? 'en-ptb' : 'penn-historical') },
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
     );
     let n = 0;
