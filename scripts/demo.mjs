@@ -62,8 +62,18 @@ const steps = [
     expect: 0,
   },
   {
-    say: 'The historical-style file, with its word-lemma leaves, converted with the Penn-Helsinki table.',
-    args: ['to-deps', '--heads', 'penn-historical', '--lemmas', '-o', 'demo-output/ferry-log.conllu', 'demo-data/ferry-log.psd'],
+    say: 'The historical-style file, with its word-lemma leaves, converted with the historical head table and POS map.',
+    args: ['to-deps', '--heads', 'penn-historical', '--pos-map', 'penn-historical', '--lemmas', '-o', 'demo-output/ferry-log.conllu', 'demo-data/ferry-log.psd'],
+    expect: 0,
+  },
+  {
+    say: 'What a conversion loses: there and back, a loss table, and a page drawing the sentences with losses.',
+    args: ['roundtrip', '--heads', 'en-content', '--pos-map', 'en-ptb', '--examples', '3', '--report', 'demo-output/harbour-losses.html', 'demo-data/harbour.psd'],
+    expect: 0,
+  },
+  {
+    say: 'Lossless mode: the whole bracketing rides in MISC, so the way back is exact.',
+    args: ['roundtrip', '--lossless', '--heads', 'en-content', 'demo-data/harbour.psd'],
     expect: 0,
   },
 ];
