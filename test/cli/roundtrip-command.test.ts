@@ -66,6 +66,9 @@ describe('treebridge roundtrip', () => {
     expect(under.code).toBe(0);
     const wrong = await cli(['roundtrip', '--heads', 'en-content', demo, '--fail-above', 'colour=5']);
     expect(wrong.code).toBe(2);
+    const notANumber = await cli(['roundtrip', '--heads', 'en-content', '--report-limit', 'abc', '--report', 'x.html', demo]);
+    expect(notANumber.code).toBe(2);
+    expect(notANumber.stderr).toContain('expected a whole number');
   });
 });
 

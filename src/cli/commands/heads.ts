@@ -11,6 +11,7 @@ import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { scoreConversion, type ConversionScore } from '../../evaluate/score-conversion.js';
 import { collectPhrases, suggestBlocks, writeSuggestedTable } from '../../evaluate/suggest-heads.js';
 import { basename } from 'node:path';
+import { wholeNumber } from '../whole-number.js';
 
 export function registerHeads(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const heads = program.command('heads').description('look into head tables: why a head was chosen');
@@ -18,7 +19,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .command('explain')
     .description('for each phrase, the head chosen and the step of the table that chose it')
     .argument('<file>', 'a bracketed file, or - for standard input')
-    .addOption(new Option('--sentence <n>', 'only the nth tree of the file (from 1)').argParser((value) => Number.parseInt(value, 10)))
+    .addOption(new Option('--sentence <n>', 'only the nth tree of the file (from 1)').argParser(wholeNumber(1)))
     .option('-o, --output <file>', 'write the explanation to a file (default: standard output)');
   addConversionOptions(explain);
   addBracketedReadOptions(explain).action(async (file: string, options: Record<string, unknown>) => done(await explainHeads(file, options, io)));
@@ -40,7 +41,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('--from <table>', 'the base table to build on and keep where it is right', 'generic')
     .requiredOption('-o, --output <file>', 'the new table file')
     .option('--name <name>', 'the new table\'s name (default: from the output file)')
-    .addOption(new Option('--min-phrases <n>', 'fewest phrases of a category to change its block').default(30).argParser((v) => Number.parseInt(v, 10)))
+    .addOption(new Option('--min-phrases <n>', 'fewest phrases of a category to change its block').default(30).argParser(wholeNumber(1)))
     .addOption(new Option('--min-gain <share>', 'least gain, as a share of the phrases, to change a block').default(0.01).argParser(Number.parseFloat))
     .addOption(new Option('--coordination <style>', 'coordination style (its phrases are left out of learning)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
     .addOption(new Option('--traces <mode>', 'where antecedents of traces attach').choices(['surface', 'restore']).default('surface'));

@@ -11,6 +11,7 @@ import { commonFormat, inputFormats, type InputFormat } from '../input-format.js
 import { openInputs, Output, type CliIO } from '../io.js';
 import { ProblemPrinter } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { wholeNumber } from '../whole-number.js';
 
 export function registerRoundtrip(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -22,10 +23,10 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .addOption(new Option('--shape <shape>', 'shape of the rebuilt bracketings').choices(['flat', 'layered']).default('flat'))
     .addOption(new Option('--score-punctuation <mode>', 'count punctuation in the scores, or ignore it (words the head table calls punctuation, or attached as punct)').choices(['count', 'ignore']).default('count'))
     .option('--json', 'print the report as JSON')
-    .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser((v) => Number.parseInt(v, 10)))
+    .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser(wholeNumber(0)))
     .option('--fail-above <limits...>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); kinds: ' + lossKinds.join(', '))
     .option('--report <file>', 'also write an HTML page drawing the sentences with losses, original and back side by side')
-    .addOption(new Option('--report-limit <n>', 'sentences drawn per kind of loss in the HTML page').default(20).argParser((v) => Number.parseInt(v, 10)))
+    .addOption(new Option('--report-limit <n>', 'sentences drawn per kind of loss in the HTML page').default(20).argParser(wholeNumber(1)))
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await roundtrip(files, options, io)));
