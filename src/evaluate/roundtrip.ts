@@ -116,6 +116,8 @@ export class BracketRoundTrip {
   private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
   /** Sentences kept for drawing, at most `samplesPerKind` for each kind. */
   readonly samples: RoundTripSample[] = [];
+  /** Trees left out because they hold no words (plain mode; lossless mode carries them). */
+  wordless = 0;
 
   constructor(
     private readonly conversion: ConversionSettings,
@@ -128,10 +130,17 @@ export class BracketRoundTrip {
 
   add(tree: Tree, id: string): Tree | undefined {
     const dependencies = convertTree(tree, this.conversion, id, id);
-    if (!dependencies) return this.conversion.lossless ? this.carryWordless(tree, id) : undefined;
+    if (!dependencies) {
+      if (this.conversion.lossless) return this.carryWordless(tree, id);
+      this.wordless++;
+      return undefined;
+    }
     const carried = this.conversion.lossless ? decodeBrackets(dependencies.sentence) : undefined;
     const rebuilt = carried ? { tree: carried } : buildBrackets(dependencies.sentence, this.bracketing);
-    if (!rebuilt) return undefined;
+    if (!rebuilt) {
+      this.note('other', id);
+      return undefined;
+    }
     if (carried && writeTree(carried) !== writeTree(tree)) this.note('other', id);
     const leaveOut = this.countPunctuation ? undefined : (pos: string) => this.conversion.heads.punctuation({ category: pos, functions: [] });
     const gold = spansOf(tree, leaveOut);

@@ -58,6 +58,15 @@ describe('treebridge roundtrip', () => {
     expect(counted.losses.punctuation).toBeGreaterThan(0);
   });
 
+  it('reports every tree it leaves out: a tree without words is named on standard error, never dropped unsaid', async () => {
+    const log = join(projectRoot, 'demo-data/ferry-log.psd');
+    const { code, stdout, stderr } = await cli(['roundtrip', '--heads', 'penn-historical', '--lemmas', log]);
+    expect(code).toBe(0);
+    expect(stdout).toMatch(/: 7 sentences,/);
+    expect(stderr.match(/\[nothing-to-convert\]/g)).toHaveLength(2);
+    expect(stderr).toContain('ferry-log.psd:1:1: warning: tree has no words');
+  });
+
   it('fails a pipeline with exit 1 when a kind of loss passes its limit', async () => {
     const over = await cli(['roundtrip', '--heads', 'en-content', demo, '--fail-above', 'nesting=10', 'wordsOrPos=0']);
     expect(over.code).toBe(1);

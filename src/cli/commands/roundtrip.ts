@@ -12,6 +12,7 @@ import { openInputs, Output, type CliIO } from '../io.js';
 import { ProblemPrinter } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
+import { reportWordlessTree } from '../report-skipped-tree.js';
 
 export function registerRoundtrip(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -58,7 +59,9 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       number++;
+      const wordless = trip.wordless;
       trip.add(tree, tree.id ?? `${tree.file}-${number}`);
+      if (trip.wordless > wordless) reportWordlessTree(tree, problems.report);
     }
     report = trip.report();
     samples = trip.samples;

@@ -4,7 +4,7 @@ import { convertTree } from '../../convert/convert-tree.js';
 import { carryComment } from '../../convert/carry-wordless-trees.js';
 import type { Tree } from '../../model/constituency.js';
 import type { DependencySentence } from '../../model/dependency.js';
-import { diagnose } from '../../diagnostics/diagnostic.js';
+import { reportWordlessTree } from '../report-skipped-tree.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
@@ -40,9 +40,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   let wordless: Tree[] = [];
   const skip = (tree: Tree) => {
     skipped++;
-    if (tree.source && tree.position) {
-      report(diagnose('nothing-to-convert', 'tree has no words (only empty elements or notes); skipped', { file: tree.file ?? '-', offset: tree.position.start, lines: tree.source }));
-    }
+    reportWordlessTree(tree, report);
   };
   try {
     const trees = readTreesOf(inputs, bracketedReadOptions(options), report, io, () => (treeInFile = 0));
