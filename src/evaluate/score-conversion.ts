@@ -1,4 +1,5 @@
 import type { Report } from '../diagnostics/diagnostic.js';
+import { reportWordlessTree } from '../convert/report-wordless-tree.js';
 import { convertTree, type ConversionSettings } from '../convert/convert-tree.js';
 import { headVector } from '../analysis/heads.js';
 import type { Tree } from '../model/constituency.js';
@@ -62,11 +63,16 @@ export async function scoreConversion(
   let skipped = 0;
   const goldIterator = gold[Symbol.asyncIterator]();
   for await (const tree of trees) {
+    // A tree without words has no gold sentence: it is reported and takes none from the gold side.
+    const conversion = convertTree(tree, settings, tree.id ?? '', tree.id ?? '');
+    if (!conversion) {
+      reportWordlessTree(tree, report);
+      continue;
+    }
     const next = await goldIterator.next();
     if (next.done) break;
     const goldSentence = next.value;
     const id = tree.id ?? goldSentence.id ?? String(scorer.score.sentences + 1);
-    const conversion = convertTree(tree, settings, id, id);
     const heads = headVector(goldSentence);
     if (!conversion || !heads) {
       skipped++;

@@ -1,3 +1,5 @@
+import { reportWordlessTree } from '../convert/report-wordless-tree.js';
+import type { Report } from '../diagnostics/diagnostic.js';
 import type { ConversionSettings } from '../convert/convert-tree.js';
 import { findHeads, candidateOf, chooseFrom } from '../convert/find-heads.js';
 import type { ConversionNode } from '../convert/conversion-tree.js';
@@ -42,17 +44,23 @@ export async function collectPhrases(
   trees: AsyncIterable<Tree>,
   gold: AsyncIterable<DependencySentence>,
   settings: ConversionSettings,
+  report: Report = () => undefined,
 ): Promise<{ samples: Map<string, Sample[]>; sentences: number; misaligned: number }> {
   const samples = new Map<string, Sample[]>();
   let sentences = 0;
   let misaligned = 0;
   const goldIterator = gold[Symbol.asyncIterator]();
   for await (const tree of trees) {
+    // A tree without words has no gold sentence: it is reported and takes none from the gold side.
+    const prepared = prepareTree(tree, settings.traces);
+    if (!prepared) {
+      reportWordlessTree(tree, report);
+      continue;
+    }
     const next = await goldIterator.next();
     if (next.done) break;
     const heads = headVector(next.value);
-    const prepared = prepareTree(tree, settings.traces);
-    if (!heads || !prepared || prepared.words.length !== heads.length - 1) {
+    if (!heads || prepared.words.length !== heads.length - 1) {
       misaligned++;
       continue;
     }

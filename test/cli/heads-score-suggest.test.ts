@@ -18,6 +18,19 @@ beforeAll(async () => {
 });
 
 describe('treebridge heads score', () => {
+  it('reports trees without words and pairs the rest with the gold sentences in order', async () => {
+    const log = join(projectRoot, 'demo-data/ferry-log.psd');
+    const logGold = join(dir, 'ferry-log-gold.conllu');
+    expect((await cli(['to-deps', '--heads', 'penn-historical', '--lemmas', '-o', logGold, log])).code).toBe(0);
+    const scored = await cli(['heads', 'score', '--json', '--heads', 'penn-historical', '--lemmas', log, '--gold', logGold]);
+    expect(JSON.parse(scored.stdout)).toMatchObject({ sentences: 7, uas: 1 });
+    expect(scored.stderr.match(/\[nothing-to-convert\]/g)).toHaveLength(2);
+    expect(scored.stderr).not.toContain('[misaligned]');
+    const suggested = await cli(['heads', 'suggest', '--from', 'penn-historical', '--lemmas', '-o', join(dir, 'log.heads'), log, '--gold', logGold]);
+    expect(suggested.stderr).toMatch(/learned from 7 sentences:/);
+    expect(suggested.stderr.match(/\[nothing-to-convert\]/g)).toHaveLength(2);
+  });
+
   it('scores a table against gold dependencies with the agreed JSON keys', async () => {
     const { code, stdout } = await cli(['heads', 'score', '--json', '--heads', 'generic', demo, '--gold', gold]);
     expect(code).toBe(0);

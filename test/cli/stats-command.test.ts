@@ -6,6 +6,13 @@ import { projectRoot } from '../support/corpora.js';
 const fixture = join(projectRoot, 'test/fixtures/conllu/harbour.conllu');
 
 describe('treebridge stats', () => {
+  it('names each bracketed tree without words that it cannot measure', async () => {
+    const { code, stdout, stderr } = await cli(['stats', '--heads', 'penn-historical', '--lemmas', join(projectRoot, 'demo-data/ferry-log.psd')]);
+    expect(code).toBe(0);
+    expect(stdout).toMatch(/sentences\s+7\n/);
+    expect(stderr.match(/\[nothing-to-convert\]/g)).toHaveLength(2);
+  });
+
   it('prints the figures as JSON with the agreed keys', async () => {
     const { code, stdout } = await cli(['stats', '--json', fixture]);
     expect(code).toBe(0);

@@ -176,7 +176,7 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   const report = problems.report;
   const path = options.output as string;
   const name = (options.name as string | undefined) ?? basename(path).replace(/\.heads$/, '');
-  const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings);
+  const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings, report);
   const { changed, kept } = suggestBlocks(collected.samples, settings.heads, {
     minimumPhrases: options.minPhrases as number,
     minimumGain: options.minGain as number,

@@ -12,7 +12,7 @@ import { openInputs, Output, type CliIO } from '../io.js';
 import { ProblemPrinter } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
-import { reportWordlessTree } from '../report-skipped-tree.js';
+import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
 
 export function registerRoundtrip(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program

@@ -13,6 +13,7 @@ import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { convertTree, type ConversionSettings } from '../../convert/convert-tree.js';
+import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
 import type { DependencySentence } from '../../model/dependency.js';
 import type { Report } from '../../diagnostics/diagnostic.js';
 
@@ -48,6 +49,7 @@ async function* sentencesOf(
     const id = tree.id ?? `${tree.file}-${number}`;
     const conversion = convertTree(tree, settings!, id, id);
     if (conversion) yield conversion.sentence;
+    else reportWordlessTree(tree, report);
   }
 }
 

@@ -4,7 +4,7 @@ import { convertTree } from '../../convert/convert-tree.js';
 import { carryComment } from '../../convert/carry-wordless-trees.js';
 import type { Tree } from '../../model/constituency.js';
 import type { DependencySentence } from '../../model/dependency.js';
-import { reportWordlessTree } from '../report-skipped-tree.js';
+import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
