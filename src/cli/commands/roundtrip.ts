@@ -50,11 +50,11 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   const problems = new ProblemPrinter(io);
   let report: RoundTripReport;
   let samples: RoundTripSample[] = [];
+  const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
   if (format === 'bracketed') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to go to dependencies: --heads NAME'] };
     const settings = conversionSettings(options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
     const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
@@ -68,7 +68,6 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   } else {
     const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'restore', coordination: 'table' });
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
     const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
     for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
