@@ -18,6 +18,19 @@
  * *generated*: a conversion pass built it. The reader fills every field below;
  * later passes never change a tree in place, they build new nodes.
  *
+ * ## Discontinuous trees
+ *
+ * In a bracketed file the leaves stand in sentence order, so every phrase
+ * covers an unbroken stretch of words. A tree read from the XML graph
+ * encoding, or one whose traces were resolved (resolve-traces), may hold
+ * *discontinuous* phrases: phrases whose words have gaps. Such a tree has
+ * `discontinuous: true`, and every terminal (word, empty element, note) carries
+ * `order`, its place in the sentence counting from 1; the children of a phrase
+ * stand in the order of their first terminal. In a tree without the flag the
+ * leaves, read left to right, are the sentence, and `order` is absent.
+ * Discontinuous trees are written as bracketings only after insert-traces has
+ * made every phrase continuous again with coindexed `*ICH*` traces.
+ *
  * Glossary terms (head, projective, gap …) are defined in DEVELOPERS.md.
  */
 import type { Label } from './label.js';
@@ -36,6 +49,10 @@ export interface Phrase {
   children: ConstituentNode[];
   /** Source span from the opening to the closing bracket; absent on generated nodes. */
   position?: Position;
+  /** The element id in the XML graph encoding, when the phrase was read from one. */
+  xmlId?: string;
+  /** Further attributes of the XML graph element, by name in written order; never read into object keys. */
+  attributes?: ReadonlyMap<string, string>;
 }
 
 /** A part-of-speech bracket over one word: `(N-N keeper-keeper)`. */
@@ -45,8 +62,14 @@ export interface Preterminal {
   pos: string;
   /** The word. */
   word: Word;
+  /** Function labels of the edge above the word (XML graph encoding); bracketings carry none. */
+  functions?: readonly string[];
   /** Source span of the bracket; absent on generated nodes. */
   position?: Position;
+  /** The terminal's id in the XML graph encoding, when read from one. */
+  xmlId?: string;
+  /** Further attributes of the terminal (`morph` …), by name in written order. */
+  attributes?: ReadonlyMap<string, string>;
 }
 
 /** A word of the sentence. */
@@ -56,6 +79,8 @@ export interface Word {
   form: string;
   /** The lemma, when the reader split `form-lemma` leaves; otherwise absent. */
   lemma?: string;
+  /** Place in the sentence among all terminals, from 1; only in discontinuous trees. */
+  order?: number;
   /** Source span of the leaf; absent on generated nodes. */
   position?: Position;
 }
@@ -74,8 +99,12 @@ export interface EmptyElement {
   kind: string;
   /** The `n` of a trailing `-n`: the coindex of the antecedent this element points to. */
   refIndex?: number;
+  /** Place in the sentence among all terminals, from 1; only in discontinuous trees. */
+  order?: number;
   /** Source span of the bracket; absent on generated nodes. */
   position?: Position;
+  /** The terminal's id in the XML graph encoding, when read from one. */
+  xmlId?: string;
 }
 
 /** A `CODE` or `META` bracket: notes, headings and markup kept beside the sentence. */
@@ -87,8 +116,12 @@ export interface MetaNode {
   text?: string;
   /** The nodes inside, when the bracket holds brackets; their words are not words of the sentence. */
   children: ConstituentNode[];
+  /** Place in the sentence among all terminals, from 1; only in discontinuous trees, on notes without children. */
+  order?: number;
   /** Source span of the bracket; absent on generated nodes. */
   position?: Position;
+  /** The terminal's id in the XML graph encoding, when read from one. */
+  xmlId?: string;
 }
 
 /** One sentence of a bracketed corpus. */
@@ -108,4 +141,20 @@ export interface Tree {
   file?: string;
   /** Lines and columns of the tree's source text, for diagnostics; filled by the reader. */
   source?: LineIndex;
+  /** Terminals carry `order` and phrases may have gaps (see "Discontinuous trees" above). */
+  discontinuous?: boolean;
+  /** Secondary edges of the XML graph encoding: extra labelled links the tree itself cannot hold. */
+  secondaryEdges?: SecondaryEdge[];
+}
+
+/** A labelled link between two nodes beside the tree's own edges (XML graph encoding `secedge`). */
+export interface SecondaryEdge {
+  /** The node the edge leaves. */
+  from: ConstituentNode;
+  /** The node it points to. */
+  to: ConstituentNode;
+  /** The edge label as written. */
+  label: string;
+  /** Where the edge element stood. */
+  position?: Position;
 }

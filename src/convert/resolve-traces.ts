@@ -1,0 +1,84 @@
+import type { ConstituentNode, EmptyElement, Phrase, Tree } from '../model/constituency.js';
+import { numberTerminals, renumberTerminals, sortByFirstTerminal } from '../model/terminal-order.js';
+
+/** Empty elements whose antecedent is interpreted where they stand (bracketing conventions, Bies et al. 1995, from memory). */
+export const MOVING_TRACES: ReadonlySet<string> = new Set(['*T*', '*ICH*', '*EXP*', '*RNR*']);
+
+/** What resolve-traces did to one tree. */
+export interface Resolution {
+  /** The discontinuous tree. */
+  tree: Tree;
+  /** How many antecedents moved to their trace. */
+  moved: number;
+}
+
+/**
+ * Turns a bracketed tree with `*T*`, `*ICH*`, `*EXP*` and `*RNR*` traces into
+ * a discontinuous tree: each antecedent (a coindexed phrase with words)
+ * becomes a child of the phrase where its first trace stood, the trace
+ * disappears, and the words keep their places in the sentence. A phrase left
+ * with no children by a move disappears too. Traces with no antecedent with
+ * words, or inside their own antecedent, stay as empty elements, and so do
+ * second traces of one antecedent (`*RNR*` shared by two conjuncts): a word can
+ * have only one parent.
+ *
+ * The input is not changed: every phrase is copied, and the copies' terminals
+ * carry `order`. A tree that is already discontinuous is resolved the same way.
+ */
+export function resolveTraces(tree: Tree): Resolution {
+  const copy = numberTerminals(tree);
+  const antecedents = new Map<number, { node: Phrase; parent: Phrase | Tree }>();
+  const traces: Array<{ trace: EmptyElement; parent: Phrase }> = [];
+  const visit = (node: ConstituentNode, parent: Phrase | Tree) => {
+    if (node.type === 'phrase') {
+      const coindex = node.label.coindex;
+      if (coindex !== undefined && parent.type === 'phrase' && hasWords(node) && !antecedents.has(coindex)) antecedents.set(coindex, { node, parent });
+      for (const child of node.children) visit(child, node);
+    } else if (node.type === 'empty' && node.refIndex !== undefined && parent.type === 'phrase' && MOVING_TRACES.has(node.kind.toUpperCase())) {
+      traces.push({ trace: node, parent });
+    }
+  };
+  for (const child of copy.children) visit(child, copy);
+  const moved = new Set<number>();
+  for (const { trace, parent } of traces) {
+    const refIndex = trace.refIndex!;
+    const antecedent = antecedents.get(refIndex);
+    if (!antecedent || moved.has(refIndex) || contains(antecedent.node, trace)) continue;
+    moved.add(refIndex);
+    const from = antecedent.parent.children;
+    from.splice(from.indexOf(antecedent.node), 1);
+    parent.children[parent.children.indexOf(trace)] = antecedent.node;
+    antecedent.parent = parent;
+  }
+  if (moved.size === 0) return { tree: copy, moved: 0 };
+  for (const child of copy.children) dropChildless(child);
+  copy.children = copy.children.filter((child) => child.type !== 'phrase' || child.children.length > 0);
+  for (const child of copy.children) sortAll(child);
+  copy.discontinuous = true;
+  // The traces that moved left holes in the numbering.
+  renumberTerminals(copy);
+  return { tree: copy, moved: moved.size };
+}
+
+function hasWords(node: ConstituentNode): boolean {
+  return node.type === 'preterminal' || (node.type === 'phrase' && node.children.some(hasWords));
+}
+
+function contains(node: ConstituentNode, target: ConstituentNode): boolean {
+  if (node === target) return true;
+  return node.type === 'phrase' && node.children.some((child) => contains(child, target));
+}
+
+/** Removes phrases a move left without children; returns whether the node keeps any. */
+function dropChildless(node: ConstituentNode): boolean {
+  if (node.type !== 'phrase') return true;
+  node.children = node.children.filter(dropChildless);
+  return node.children.length > 0;
+}
+
+/** Puts children in the order of their first terminal, as the contract of discontinuous trees asks. */
+function sortAll(node: ConstituentNode): void {
+  if (node.type !== 'phrase') return;
+  for (const child of node.children) sortAll(child);
+  sortByFirstTerminal(node.children);
+}
