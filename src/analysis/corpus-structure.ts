@@ -13,6 +13,8 @@ export interface CorpusStructure {
   nonProjectiveArcs: number;
   /** Sentences by gap degree. */
   gapDegree: Distribution;
+  /** Words of gap degree 1 or more (their yield has a gap), over all sentences. */
+  gappedWords: number;
   /** Sentences by edge degree. */
   edgeDegree: Distribution;
   wellNestedSentences: number;
@@ -29,6 +31,7 @@ export class CorpusStructureCounter {
     nonProjectiveSentences: 0,
     nonProjectiveArcs: 0,
     gapDegree: {},
+    gappedWords: 0,
     edgeDegree: {},
     wellNestedSentences: 0,
     arcLength: {},
@@ -42,6 +45,7 @@ export class CorpusStructureCounter {
     if (structure.nonProjectiveArcs.length > 0) t.nonProjectiveSentences++;
     t.nonProjectiveArcs += structure.nonProjectiveArcs.length;
     count(t.gapDegree, structure.gapDegree);
+    t.gappedWords += structure.gappedWords;
     count(t.edgeDegree, structure.edgeDegree);
     if (structure.wellNested) t.wellNestedSentences++;
     for (const length of structure.arcLengths) count(t.arcLength, length);

@@ -10,6 +10,7 @@ export function formatCorpusStructure(s: CorpusStructure): string {
     ['arcs (root arcs left out)', number(s.arcs)],
     ['non-projective arcs', number(s.nonProjectiveArcs) + share(s.nonProjectiveArcs, s.arcs)],
     ['non-projective sentences', number(s.nonProjectiveSentences) + share(s.nonProjectiveSentences, s.sentences)],
+    ['words whose yield has a gap', number(s.gappedWords) + share(s.gappedWords, s.words)],
     ['well-nested sentences', number(s.wellNestedSentences) + share(s.wellNestedSentences, s.sentences)],
   ];
   const width = Math.max(...rows.map(([name]) => name.length));

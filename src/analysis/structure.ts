@@ -25,6 +25,8 @@ export interface TreeStructure {
   nonProjectiveArcs: NonProjectiveArc[];
   /** Gap degree of the tree: the most gaps in any word's yield (Kuhlmann & Nivre 2006, Defs. 6–7). */
   gapDegree: number;
+  /** Words of gap degree 1 or more: their yield has a gap, so their phrase is discontinuous. */
+  gappedWords: number;
   /** Edge degree of the tree: the highest edge degree of any arc (Kuhlmann & Nivre 2006, Def. 9). */
   edgeDegree: number;
   /** No two disjoint subtrees interleave (Kuhlmann & Nivre 2006, Def. 8). */
@@ -54,7 +56,11 @@ export function analyseTree(heads: readonly number[]): TreeStructure {
   const nonProjectiveArcs = findNonProjectiveArcs(heads, layout);
   const gaps = gapDegrees(heads, layout);
   let gapDegree = 0;
-  for (let word = 1; word <= n; word++) gapDegree = Math.max(gapDegree, gaps[word]!);
+  let gappedWords = 0;
+  for (let word = 1; word <= n; word++) {
+    gapDegree = Math.max(gapDegree, gaps[word]!);
+    if (gaps[word]! > 0) gappedWords++;
+  }
   let edgeDegree = 0;
   for (const arc of nonProjectiveArcs) edgeDegree = Math.max(edgeDegree, degreeOfEdge(heads, layout, arc.head, arc.dependent));
   const arcLengths: number[] = [];
@@ -65,7 +71,7 @@ export function analyseTree(heads: readonly number[]): TreeStructure {
     arcLengths.push(Math.abs(heads[word]! - word));
   }
   const wellNested = gapDegree === 0 || isWellNested(layout, gaps);
-  return { words: n, arcs, nonProjectiveArcs, gapDegree, edgeDegree, wellNested, arcLengths };
+  return { words: n, arcs, nonProjectiveArcs, gapDegree, gappedWords, edgeDegree, wellNested, arcLengths };
 }
 
 /** Does `ancestor` dominate `word` (reflexively)? */

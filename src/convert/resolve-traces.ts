@@ -1,5 +1,5 @@
 import type { ConstituentNode, EmptyElement, Phrase, Tree } from '../model/constituency.js';
-import { numberTerminals, renumberTerminals, sortByFirstTerminal } from '../model/terminal-order.js';
+import { numberTerminals, renumberTerminals, sortTreeByFirstTerminal } from '../model/terminal-order.js';
 
 /** Empty elements whose antecedent is interpreted where they stand (bracketing conventions, Bies et al. 1995, from memory). */
 export const MOVING_TRACES: ReadonlySet<string> = new Set(['*T*', '*ICH*', '*EXP*', '*RNR*']);
@@ -53,7 +53,7 @@ export function resolveTraces(tree: Tree): Resolution {
   if (moved.size === 0) return { tree: copy, moved: 0 };
   for (const child of copy.children) dropChildless(child);
   copy.children = copy.children.filter((child) => child.type !== 'phrase' || child.children.length > 0);
-  for (const child of copy.children) sortAll(child);
+  sortTreeByFirstTerminal(copy);
   copy.discontinuous = true;
   // The traces that moved left holes in the numbering.
   renumberTerminals(copy);
@@ -74,11 +74,4 @@ function dropChildless(node: ConstituentNode): boolean {
   if (node.type !== 'phrase') return true;
   node.children = node.children.filter(dropChildless);
   return node.children.length > 0;
-}
-
-/** Puts children in the order of their first terminal, as the contract of discontinuous trees asks. */
-function sortAll(node: ConstituentNode): void {
-  if (node.type !== 'phrase') return;
-  for (const child of node.children) sortAll(child);
-  sortByFirstTerminal(node.children);
 }

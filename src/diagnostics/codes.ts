@@ -20,6 +20,22 @@ export const diagnosticCodes = {
   'tree-too-large': { severity: 'error', meaning: 'a single tree is larger than the reader accepts' },
   'bad-bracketing': { severity: 'error', meaning: 'a balanced bracket that still does not parse as a tree' },
   'io-error': { severity: 'error', meaning: 'a file could not be read or written' },
+  // XML graph encoding: the file or the sentence is not read.
+  'xml-malformed': { severity: 'error', meaning: 'the file is not well-formed XML; it is not read past the problem' },
+  'xml-doctype': { severity: 'error', meaning: 'a document type declaration, refused: no DTD is fetched and no declared entity expanded' },
+  'xml-too-deep': { severity: 'error', meaning: 'elements or graph nodes nested deeper than the reader accepts' },
+  'xml-too-large': { severity: 'error', meaning: 'a sentence (or the text outside sentences) longer than the reader accepts' },
+  'graph-missing-attribute': { severity: 'error', meaning: 'a node without id, an edge without idref, or a terminal without word' },
+  'graph-duplicate-id': { severity: 'error', meaning: 'two nodes of a sentence share an id' },
+  'graph-dangling-idref': { severity: 'error', meaning: 'an edge points to an id no node of the sentence has' },
+  'graph-several-parents': { severity: 'error', meaning: 'a node is the target of two edges' },
+  'graph-cycle': { severity: 'error', meaning: 'edges lead round in a circle, or into the root' },
+  'graph-no-root': { severity: 'error', meaning: 'the graph names no root, or a root that is no node' },
+  'graph-childless': { severity: 'error', meaning: 'a nonterminal without edges' },
+  'graph-bad-attribute': { severity: 'error', meaning: 'an attribute of ours (coindex, gapindex) with a value that is not a number' },
+  'graph-unattached': { severity: 'warning', meaning: 'a node no edge reaches; it is put under the root' },
+  'xml-unexpected-element': { severity: 'warning', meaning: 'an element inside a sentence that is not part of the graph encoding, ignored' },
+  'xml-unexpected-content': { severity: 'warning', meaning: 'text inside a sentence, where the encoding has only elements; ignored' },
   // Annotation: the tree is read.
   'several-roots': { severity: 'warning', meaning: 'the outer bracket holds more than one sentence node' },
   'trace-without-antecedent': { severity: 'warning', meaning: 'a trace points to an index no node carries' },
@@ -32,6 +48,7 @@ export const diagnosticCodes = {
   'missing-lemma': { severity: 'warning', meaning: 'lemma splitting is on but a word has no `-lemma` part' },
   // Conversion.
   'nothing-to-convert': { severity: 'warning', meaning: 'a tree without words (only empty elements or notes) is skipped' },
+  'secondary-edges-dropped': { severity: 'warning', meaning: 'secondary edges of a graph have no place in the output and are left out' },
   'not-a-tree': { severity: 'error', meaning: 'a sentence whose heads do not form a tree cannot be bracketed' },
   'misaligned': { severity: 'warning', meaning: 'a converted sentence and its gold sentence do not have the same words' },
   // Head and label tables.

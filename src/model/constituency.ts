@@ -143,6 +143,8 @@ export interface Tree {
   source?: LineIndex;
   /** Terminals carry `order` and phrases may have gaps (see "Discontinuous trees" above). */
   discontinuous?: boolean;
+  /** Further attributes of the sentence element of the XML graph encoding, by name in written order. */
+  attributes?: ReadonlyMap<string, string>;
   /** Secondary edges of the XML graph encoding: extra labelled links the tree itself cannot hold. */
   secondaryEdges?: SecondaryEdge[];
 }

@@ -86,3 +86,17 @@ export function sortByFirstTerminal(nodes: ConstituentNode[]): void {
   keyed.sort((a, b) => a.first - b.first);
   keyed.forEach((entry, i) => (nodes[i] = entry.node));
 }
+
+/** Sorts the children of every phrase of a tree, in place, by their first terminal. */
+export function sortTreeByFirstTerminal(tree: Tree): void {
+  const visit = (node: ConstituentNode): number => {
+    if (node.type !== 'phrase') return firstOrder(node);
+    const keyed = node.children.map((child) => ({ node: child, first: visit(child) }));
+    keyed.sort((a, b) => a.first - b.first);
+    keyed.forEach((entry, i) => (node.children[i] = entry.node));
+    return keyed.length > 0 ? keyed[0]!.first : Infinity;
+  };
+  const keyed = tree.children.map((child) => ({ node: child, first: visit(child) }));
+  keyed.sort((a, b) => a.first - b.first);
+  keyed.forEach((entry, i) => (tree.children[i] = entry.node));
+}

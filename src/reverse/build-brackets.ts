@@ -2,6 +2,7 @@ import { wordsOf } from '../analysis/heads.js';
 import type { ConstituentNode, EmptyElement, Phrase, Preterminal, Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { parseLabel } from '../model/label.js';
+import { sortTreeByFirstTerminal } from '../model/terminal-order.js';
 import { categoryOf, type CategoryTable } from '../tables/load-category-table.js';
 import { liftNonProjectiveArcs, type Lift } from './lift-nonprojective-arcs.js';
 
@@ -17,6 +18,8 @@ export interface BracketSettings {
   shape: BracketShape;
   /** Which column gives the part-of-speech brackets. */
   pos: 'upos' | 'xpos';
+  /** Build discontinuous phrases for non-projective subtrees instead of lifting arcs (for the XML graph encoding). */
+  discontinuous?: boolean;
 }
 
 /** A rebuilt bracketing, with the lifts that made it projective. */
@@ -35,13 +38,17 @@ export interface Bracketing {
  * a word without dependents still gets a phrase when it is a dependent, so
  * that no relation is lost. Every node is generated (no position). Undefined
  * when the sentence's heads are not a tree.
+ *
+ * With `discontinuous`, nothing is lifted: the phrase of a word covers
+ * exactly its subtree, gaps and all, and the tree is a discontinuous one (see
+ * the tree contract) whose words carry their place in the sentence.
  */
 export function buildBrackets(sentence: DependencySentence, settings: BracketSettings): Bracketing | undefined {
   const words = wordsOf(sentence);
   const n = words.length;
   const original = [0, ...words.map((w) => Number(w.head))];
   if (original.some((h) => !Number.isInteger(h) || h < 0 || h > n) || original.filter((h, i) => i > 0 && h === 0).length !== 1) return undefined;
-  const { heads, lifts } = liftNonProjectiveArcs(original);
+  const { heads, lifts } = settings.discontinuous ? { heads: original, lifts: [] } : liftNonProjectiveArcs(original);
   // A lifted dependent's coindex, and the trace inside the phrase of its real head.
   const coindex = new Map<number, number>();
   const traces = new Map<number, Array<{ at: number; index: number }>>();
@@ -66,7 +73,7 @@ export function buildBrackets(sentence: DependencySentence, settings: BracketSet
     // Round brackets in forms are written -LRB- and -RRB-, as bracketing conventions have it (Bies et al.
     // 1995, from memory), so that readers without escapes read them; a space becomes a no-break space.
     const form = word.form.replace(/\(/g, '-LRB-').replace(/\)/g, '-RRB-').replace(/ /g, '\u00a0');
-    return { type: 'preterminal', pos: tag, word: { type: 'word', form, lemma: undefined } };
+    return { type: 'preterminal', pos: tag, word: settings.discontinuous ? { type: 'word', form, lemma: undefined, order: w } : { type: 'word', form, lemma: undefined } };
   };
   const trace = (index: number): EmptyElement => ({
     type: 'empty',
@@ -113,5 +120,10 @@ export function buildBrackets(sentence: DependencySentence, settings: BracketSet
 
   const top = build(root);
   const tree: Tree = { type: 'tree', wrapper: { label: '' }, children: [top], id: sentence.id, idPosition: undefined, position: undefined, file: sentence.file, source: undefined };
+  if (settings.discontinuous) {
+    tree.discontinuous = true;
+    // A dependent's phrase may begin before the dependent itself: order children by their first word.
+    sortTreeByFirstTerminal(tree);
+  }
   return { tree, lifts };
 }

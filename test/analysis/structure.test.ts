@@ -31,16 +31,20 @@ function nonProjectiveByDefinition(heads: number[]): string[] {
   }
   return arcs;
 }
-/** Kuhlmann & Nivre (2006), Defs. 6–7: gaps between neighbours of the sorted yield; the tree's is the maximum. */
-function gapDegreeByDefinition(heads: number[]): number {
-  let most = 0;
+/** Kuhlmann & Nivre (2006), Defs. 6–7: gaps between neighbours of the sorted yield, per word. */
+function gapsByDefinition(heads: number[]): number[] {
+  const degrees: number[] = [];
   for (let word = 1; word < heads.length; word++) {
     const y = yieldByDefinition(heads, word);
     let gaps = 0;
     for (let i = 1; i < y.length; i++) if (y[i]! - y[i - 1]! > 1) gaps++;
-    most = Math.max(most, gaps);
+    degrees.push(gaps);
   }
-  return most;
+  return degrees;
+}
+/** The tree's gap degree is the maximum over its words. */
+function gapDegreeByDefinition(heads: number[]): number {
+  return Math.max(0, ...gapsByDefinition(heads));
 }
 /** Kuhlmann & Nivre (2006), Def. 9: components of the span's induced subgraph whose root the head does not dominate. */
 function edgeDegreeByDefinition(heads: number[]): number {
@@ -147,6 +151,7 @@ describe('structure of a dependency tree', () => {
       const label = JSON.stringify(heads);
       expect(fast.nonProjectiveArcs.map((a) => `${a.head}->${a.dependent}`), label).toEqual(nonProjectiveByDefinition(heads));
       expect(fast.gapDegree, label).toBe(gapDegreeByDefinition(heads));
+      expect(fast.gappedWords, label).toBe(gapsByDefinition(heads).filter((gaps) => gaps > 0).length);
       expect(fast.edgeDegree, label).toBe(edgeDegreeByDefinition(heads));
       expect(fast.wellNested, label).toBe(wellNestedByDefinition(heads));
     }

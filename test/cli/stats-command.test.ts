@@ -18,7 +18,7 @@ describe('treebridge stats', () => {
     expect(code).toBe(0);
     const figures = JSON.parse(stdout);
     expect(Object.keys(figures)).toEqual([
-      'sentences', 'words', 'arcs', 'nonProjectiveSentences', 'nonProjectiveArcs', 'gapDegree', 'edgeDegree', 'wellNestedSentences', 'arcLength',
+      'sentences', 'words', 'arcs', 'nonProjectiveSentences', 'nonProjectiveArcs', 'gapDegree', 'gappedWords', 'edgeDegree', 'wellNestedSentences', 'arcLength',
     ]);
     expect(figures).toMatchObject({ sentences: 3, words: 21, arcs: 18, nonProjectiveSentences: 0, gapDegree: { 0: 3 } });
   });

@@ -1,5 +1,6 @@
 import type { ConstituentNode, Tree } from '../../model/constituency.js';
 import { formatLabel } from '../../model/label.js';
+import { insertTraces } from '../../reverse/insert-traces.js';
 import { escapeLeaf } from './leaves.js';
 
 /**
@@ -20,8 +21,13 @@ export interface WriteOptions {
   idLabel?: string;
 }
 
-/** Writes one tree, ending with a line feed (and a blank line in the indented layout). */
+/**
+ * Writes one tree, ending with a line feed (and a blank line in the indented
+ * layout). A discontinuous tree is first made continuous with `*ICH*` traces
+ * (insert-traces), as a bracketing holds only continuous phrases.
+ */
 export function writeTree(tree: Tree, options: WriteOptions = {}): string {
+  if (tree.discontinuous) tree = insertTraces(tree).tree;
   const parts = tree.children.map((child) => new Part(child));
   if (tree.id !== undefined) parts.push(Part.leaf(options.idLabel ?? 'ID', escapeLeaf(tree.id)));
   let top: Part;
@@ -58,7 +64,8 @@ class Part {
         break;
       case 'preterminal': {
         const { form, lemma } = node.word;
-        this.label = node.pos;
+        // Edge labels above a word (XML graph encoding) ride on the tag, where readers of bracketings look for them.
+        this.label = node.functions && node.functions.length > 0 ? [node.pos, ...node.functions].join('-') : node.pos;
         this.leaf = escapeLeaf(lemma === undefined ? form : `${form}-${lemma}`);
         this.children = [];
         break;

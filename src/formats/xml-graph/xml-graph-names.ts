@@ -1,0 +1,18 @@
+/**
+ * Values with a meaning of their own in treebridge's use of the XML graph
+ * encoding. Elements and the attributes `id`, `word`, `lemma`, `pos`, `cat`,
+ * `label`, `idref` and `root` are the encoding's; the rest are ours, and
+ * other readers keep them as ordinary attributes.
+ */
+
+/** Written for a label or category that is not given. */
+export const ABSENT = '--';
+
+/** The tag of an empty element, also in files that do not mark kinds. */
+export const EMPTY_POS = '-NONE-';
+
+/** Our attribute that marks what a terminal or nonterminal stands for, when it is not a word or a phrase. */
+export const KIND = 'kind';
+
+/** `kind` of the nonterminal that stands for a bracketing's outer wrapper bracket. */
+export const WRAPPER = 'wrapper';

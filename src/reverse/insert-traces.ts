@@ -1,0 +1,142 @@
+import type { ConstituentNode, EmptyElement, Phrase, Tree } from '../model/constituency.js';
+import { parseLabel } from '../model/label.js';
+import { numberTerminals, orderOf, renumberTerminals, sortTreeByFirstTerminal, terminalsOf } from '../model/terminal-order.js';
+
+/** What insert-traces did to one tree. */
+export interface TraceInsertion {
+  /** A tree whose phrases are all continuous, leaves in sentence order; `order` is gone. */
+  tree: Tree;
+  /** How many `*ICH*` traces were put in. */
+  traces: number;
+}
+
+/**
+ * Turns a discontinuous tree into a bracketing, the opposite of
+ * resolve-traces: in every discontinuous phrase, lowest first, one unbroken
+ * run of children stays (the one holding a word of the phrase's own, where
+ * heads usually are, else the longest); each other child moves up to the phrase's
+ * parent, gets a fresh coindex n, and leaves `(-NONE- *ICH*-n)` beside the run
+ * it was cut from (before it or after it, as the child stood), following the
+ * convention for "interpret constituent here" (Bies et al. 1995, from
+ * memory). A child that already moved once moves on without a second trace,
+ * so each moved phrase has exactly one. A word moved on its own is wrapped in
+ * a phrase named after its tag, as only phrases carry coindices. Resolving
+ * the traces of the result gives the discontinuous tree back.
+ *
+ * A tree that is not discontinuous comes back as it is.
+ */
+export function insertTraces(tree: Tree): TraceInsertion {
+  if (!tree.discontinuous) return { tree, traces: 0 };
+  const copy = numberTerminals(tree);
+  let nextIndex = largestIndex(copy) + 1;
+  const moved = new Set<ConstituentNode>();
+  let traces = 0;
+
+  /** Makes the phrases under `node` continuous, lowest first, moving children out into `parentChildren`. */
+  const mend = (node: ConstituentNode, parentChildren: ConstituentNode[]) => {
+    if (node.type !== 'phrase') return;
+    for (const child of [...node.children]) mend(child, node.children);
+    const runs = runsOf(node.children);
+    if (runs.length < 2) return;
+    const kept = runs.reduce((best, run) => (keepScore(run) > keepScore(best) ? run : best));
+    const first = kept.from;
+    const last = kept.to;
+    const leaving = node.children.filter((child) => !kept.children.includes(child));
+    const before = leaving.filter((child) => firstOf(child) < first);
+    const after = leaving.filter((child) => firstOf(child) > last);
+    node.children = [...kept.children];
+    for (const child of leaving) {
+      const isFirstMove = !moved.has(child);
+      const outgoing = isFirstMove ? coindexed(child, nextIndex) : child;
+      if (isFirstMove) {
+        // The trace stands just outside the kept run, on the side the child came from.
+        const side = before.includes(child) ? before : after;
+        const k = side.indexOf(child);
+        const order = side === before ? first - 1 + (k + 1) / (before.length + 1) : last + (k + 1) / (after.length + 1);
+        node.children.push(traceTo(nextIndex, order));
+        nextIndex++;
+        traces++;
+      }
+      moved.add(outgoing);
+      parentChildren.push(outgoing);
+    }
+    renumberTerminals(copy);
+    sortTreeByFirstTerminal(copy);
+  };
+  for (const child of [...copy.children]) mend(child, copy.children);
+  const mended: Tree = { ...copy, children: copy.children.map(withoutOrder) };
+  delete mended.discontinuous;
+  return { tree: mended, traces };
+}
+
+/** Maximal runs of children whose terminals follow each other without a gap. */
+function runsOf(children: ConstituentNode[]): Array<{ children: ConstituentNode[]; from: number; to: number; size: number }> {
+  const spans = children.map((child) => ({ child, ...spanOf(child) })).sort((a, b) => a.from - b.from);
+  const runs: Array<{ children: ConstituentNode[]; from: number; to: number; size: number }> = [];
+  for (const span of spans) {
+    const run = runs[runs.length - 1];
+    if (run && span.from === run.to + 1) {
+      run.children.push(span.child);
+      run.to = span.to;
+      run.size += span.size;
+    } else runs.push({ children: [span.child], from: span.from, to: span.to, size: span.size });
+  }
+  return runs;
+}
+
+/** Runs with a word directly under the phrase win; among the rest, and among those, the longest. */
+function keepScore(run: { children: ConstituentNode[]; size: number }): number {
+  return (run.children.some((child) => child.type === 'preterminal') ? 1e9 : 0) + run.size;
+}
+
+/** First and last order under a continuous node, and how many terminals it holds. */
+function spanOf(node: ConstituentNode): { from: number; to: number; size: number } {
+  const orders = terminalsOf({ type: 'tree', children: [node] }).map((terminal) => orderOf(terminal)!);
+  return { from: Math.min(...orders), to: Math.max(...orders), size: orders.length };
+}
+
+function firstOf(node: ConstituentNode): number {
+  return spanOf(node).from;
+}
+
+/** The node with coindex n: a phrase gets it on its label, anything else is wrapped in a phrase that carries it. */
+function coindexed(node: ConstituentNode, index: number): Phrase {
+  if (node.type === 'phrase') return { ...node, label: { ...node.label, coindex: index } };
+  let category = 'X';
+  if (node.type === 'preterminal') category = parseLabel(node.pos).category;
+  else if (node.type === 'empty') category = node.label.category;
+  return { type: 'phrase', label: { category, functions: [], coindex: index }, children: [node] };
+}
+
+function traceTo(index: number, order: number): EmptyElement {
+  return { type: 'empty', label: parseLabel('-NONE-'), text: `*ICH*-${index}`, kind: '*ICH*', refIndex: index, order };
+}
+
+/** The largest coindex, gapping index or trace index in the tree, so that new ones do not clash. */
+function largestIndex(tree: Tree): number {
+  let largest = 0;
+  const visit = (node: ConstituentNode) => {
+    if (node.type === 'phrase') {
+      largest = Math.max(largest, node.label.coindex ?? 0, node.label.gapIndex ?? 0);
+      node.children.forEach(visit);
+    } else if (node.type === 'empty') largest = Math.max(largest, node.refIndex ?? 0, node.label.coindex ?? 0);
+  };
+  tree.children.forEach(visit);
+  return largest;
+}
+
+function withoutOrder(node: ConstituentNode): ConstituentNode {
+  switch (node.type) {
+    case 'phrase':
+      return { ...node, children: node.children.map(withoutOrder) };
+    case 'preterminal': {
+      const { order: _order, ...word } = node.word;
+      return { ...node, word };
+    }
+    case 'empty':
+    case 'meta': {
+      const { order: _order, ...rest } = node;
+      return rest as ConstituentNode;
+    }
+  }
+}
