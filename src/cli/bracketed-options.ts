@@ -1,5 +1,5 @@
 import { Option, type Command } from 'commander';
-import type { BracketedReadOptions } from '../formats/bracketed/read-options.js';
+import type { TreeReadOptions } from './read-trees.js';
 import type { TreeBreaks } from '../formats/bracketed/split-trees.js';
 
 /** The reading options every command that reads bracketed trees shares. */
@@ -15,13 +15,19 @@ export function addBracketedReadOptions(command: Command): Command {
     .option('--literal-tags <tags>', 'comma-separated tags under which "*" and "0" are words, not empty elements');
 }
 
-/** Reading options from the parsed command line. */
-export function bracketedReadOptions(options: Record<string, unknown>): BracketedReadOptions {
-  const read: BracketedReadOptions = {
+/** `--from` for commands that read only constituency trees: bracketed or the XML graph encoding. */
+export function addTreeFormatOption(command: Command): Command {
+  return command.addOption(new Option('--from <format>', 'input format (default: by extension, .xml is the XML graph encoding)').choices(['bracketed', 'xml']));
+}
+
+/** Reading options from the parsed command line; `--from` passes on when it names a tree format. */
+export function bracketedReadOptions(options: Record<string, unknown>): TreeReadOptions {
+  const read: TreeReadOptions = {
     splitLemmas: options.lemmas === true,
     keepMeta: options.dropMeta !== true,
     treeBreaks: options.treeBreaks as TreeBreaks,
   };
+  if (options.from === 'bracketed' || options.from === 'xml') read.from = options.from;
   if (typeof options.literalTags === 'string') {
     read.literalTags = options.literalTags.split(',').map((tag) => tag.trim()).filter(Boolean);
   }

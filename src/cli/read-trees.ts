@@ -4,6 +4,8 @@ import type { BracketedReadOptions } from '../formats/bracketed/read-options.js'
 import { readConllu } from '../formats/conllu/read-conllu.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
+import { readXmlGraphs } from '../formats/xml-graph/read-xml-graph.js';
+import { formatOf, type TreeFormat } from './input-format.js';
 import type { CliIO, Input } from './io.js';
 import { startProgress } from './progress.js';
 
@@ -36,15 +38,23 @@ export async function* readInputs<T>(
   }
 }
 
-/** The bracketed trees of several inputs. */
+/** How trees are read: the bracketed reader's options, and the format when not by extension. */
+export type TreeReadOptions = BracketedReadOptions & { from?: TreeFormat };
+
+/** The constituency trees of several inputs, each read as bracketed trees or the XML graph encoding (see formatOf). */
 export function readTreesOf(
   inputs: Input[],
-  options: BracketedReadOptions,
+  options: TreeReadOptions,
   report: Report,
   io: CliIO,
   onInput?: (input: Input) => void,
 ): AsyncGenerator<Tree> {
+  const formats = new Map(inputs.map((input) => [input.name, formatOf(input, options.from)]));
   const read = async function* (pieces: AsyncIterable<string>, name: string) {
+    if (formats.get(name) === 'xml') {
+      yield* readXmlGraphs(pieces, { file: name }, report);
+      return;
+    }
     for await (const batch of readBracketedBatches(pieces, { ...options, file: name }, report)) yield* batch;
   };
   return readInputs(inputs, read, io, onInput);

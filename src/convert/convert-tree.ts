@@ -10,6 +10,7 @@ import { oracleChooser } from './oracle-heads.js';
 import { BRACKETS_KEY, encodeBrackets } from './encode-brackets.js';
 import type { CoordinationStyle } from './handle-coordination.js';
 import { prepareTree, type TraceMode } from './prepare-tree.js';
+import { insertTraces } from '../reverse/insert-traces.js';
 
 /** Everything a conversion needs besides the tree. */
 export interface ConversionSettings {
@@ -69,7 +70,8 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
     id,
   };
   if (settings.lossless) {
-    const encoded = encodeBrackets(tree, settings);
+    // A discontinuous tree is carried as its bracketing with *ICH* traces.
+    const encoded = encodeBrackets(tree.discontinuous ? insertTraces(tree).tree : tree, settings);
     if (encoded) {
       sentence.comments.push({ type: 'comment', text: ` brackets = ${encoded.sentence}` });
       lines.forEach((line, i) => {

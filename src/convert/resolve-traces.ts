@@ -51,6 +51,23 @@ export function resolveTraces(tree: Tree): Resolution {
     antecedent.parent = parent;
   }
   if (moved.size === 0) return { tree: copy, moved: 0 };
+  // A moved antecedent keeps its coindex only while something else still points to it.
+  const stillPointed = new Set<number>();
+  const collect = (node: ConstituentNode) => {
+    if (node.type === 'empty' && node.refIndex !== undefined) stillPointed.add(node.refIndex);
+    if (node.type === 'phrase') {
+      if (node.label.gapIndex !== undefined) stillPointed.add(node.label.gapIndex);
+      node.children.forEach(collect);
+    }
+  };
+  copy.children.forEach(collect);
+  for (const index of moved) {
+    const antecedent = antecedents.get(index)!;
+    if (stillPointed.has(index)) continue;
+    // The phrase is this function's own copy, so it may change in place.
+    const { coindex: _dropped, ...label } = antecedent.node.label;
+    antecedent.node.label = label;
+  }
   for (const child of copy.children) dropChildless(child);
   copy.children = copy.children.filter((child) => child.type !== 'phrase' || child.children.length > 0);
   sortTreeByFirstTerminal(copy);

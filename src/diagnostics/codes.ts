@@ -19,6 +19,7 @@ export const diagnosticCodes = {
   'invalid-encoding': { severity: 'error', meaning: 'bytes that are not valid UTF-8' },
   'tree-too-large': { severity: 'error', meaning: 'a single tree is larger than the reader accepts' },
   'bad-bracketing': { severity: 'error', meaning: 'a balanced bracket that still does not parse as a tree' },
+  'unwritable-tree': { severity: 'error', meaning: 'a tree holds characters the output format cannot hold; it is not written' },
   'io-error': { severity: 'error', meaning: 'a file could not be read or written' },
   // XML graph encoding: the file or the sentence is not read.
   'xml-malformed': { severity: 'error', meaning: 'the file is not well-formed XML; it is not read past the problem' },

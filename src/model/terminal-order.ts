@@ -100,3 +100,17 @@ export function sortTreeByFirstTerminal(tree: Tree): void {
   keyed.sort((a, b) => a.first - b.first);
   keyed.forEach((entry, i) => (tree.children[i] = entry.node));
 }
+
+/** How many phrases of a tree have gaps: their terminals are not one unbroken stretch of the sentence. */
+export function countDiscontinuousPhrases(tree: Tree): number {
+  if (!tree.discontinuous) return 0;
+  let count = 0;
+  const visit = (node: ConstituentNode): number[] => {
+    if (node.type !== 'phrase') return [firstOrder(node)];
+    const orders = node.children.flatMap(visit);
+    if (Math.max(...orders) - Math.min(...orders) + 1 !== orders.length) count++;
+    return orders;
+  };
+  tree.children.forEach(visit);
+  return count;
+}

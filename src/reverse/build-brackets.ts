@@ -72,8 +72,10 @@ export function buildBrackets(sentence: DependencySentence, settings: BracketSet
     const tag = settings.pos === 'xpos' && word.xpos !== '_' ? word.xpos : word.upos !== '_' ? word.upos : 'X';
     // Round brackets in forms are written -LRB- and -RRB-, as bracketing conventions have it (Bies et al.
     // 1995, from memory), so that readers without escapes read them; a space becomes a no-break space.
+    // The XML graph encoding holds any form as it is, and has a place for the lemma (a bracketing would need --lemmas to read it back).
+    if (settings.discontinuous) return { type: 'preterminal', pos: tag, word: { type: 'word', form: word.form, lemma: word.lemma === '_' ? undefined : word.lemma, order: w } };
     const form = word.form.replace(/\(/g, '-LRB-').replace(/\)/g, '-RRB-').replace(/ /g, '\u00a0');
-    return { type: 'preterminal', pos: tag, word: settings.discontinuous ? { type: 'word', form, lemma: undefined, order: w } : { type: 'word', form, lemma: undefined } };
+    return { type: 'preterminal', pos: tag, word: { type: 'word', form, lemma: undefined } };
   };
   const trace = (index: number): EmptyElement => ({
     type: 'empty',

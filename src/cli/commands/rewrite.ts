@@ -1,7 +1,9 @@
 import { Option, type Command } from 'commander';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
-import { writeTree, type Layout } from '../../formats/bracketed/write-bracketed.js';
-import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import type { Layout } from '../../formats/bracketed/write-bracketed.js';
+import { resolveTraces } from '../../convert/resolve-traces.js';
+import { TreeSink, treeOutputFormat } from '../tree-output.js';
+import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readTreesOf } from '../read-trees.js';
@@ -9,10 +11,13 @@ import { readTreesOf } from '../read-trees.js';
 export function registerRewrite(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
     .command('rewrite')
-    .description('read bracketed trees and write them again in a chosen layout; problems go to standard error')
+    .description('read constituency trees (bracketed or XML graphs) and write them again, in a chosen layout or the other format; problems go to standard error')
     .argument('<files...>', 'input files, or - for standard input')
     .addOption(new Option('--layout <layout>', 'line: one tree per line; indented: one bracket per line where it does not fit').choices(['line', 'indented']).default('line'))
+    .addOption(new Option('--to <format>', 'output format (default: by the output file\'s extension, .xml is the XML graph encoding; else bracketed)').choices(['bracketed', 'xml']))
+    .addOption(new Option('--traces <mode>', 'keep: traces stay empty elements; resolve: antecedents of *T* *ICH* *EXP* *RNR* become discontinuous children where their traces stood').choices(['keep', 'resolve']).default('keep'))
     .option('-o, --output <file>', 'write the trees to a file (default: standard output)');
+  addTreeFormatOption(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => {
     done(await rewrite(files, options, io));
   });
@@ -27,14 +32,33 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
     if (diagnostic.severity === 'error') errors++;
     io.stderr.write(formatDiagnostic(diagnostic) + '\n');
   };
+  const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), layout, report);
+  let read = 0;
+  let written = 0;
+  let moved = 0;
   try {
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
-      await output.write(writeTree(tree, { layout }));
+      read++;
+      let resolved = tree;
+      if (options.traces === 'resolve') {
+        const resolution = resolveTraces(tree);
+        moved += resolution.moved;
+        resolved = resolution.tree;
+      }
+      if (await sink.write(resolved)) written++;
     }
+    await sink.finish();
     await output.commit();
   } catch (error) {
     await output.abandon();
     throw error;
+  }
+  const notes = [
+    options.traces === 'resolve' ? `${moved} antecedent${moved === 1 ? '' : 's'} moved to their traces` : '',
+    sink.tracesInserted > 0 ? `${sink.tracesInserted} *ICH* trace${sink.tracesInserted === 1 ? '' : 's'} put in for discontinuous phrases` : '',
+  ].filter(Boolean);
+  if (options.traces === 'resolve' || sink.tracesInserted > 0 || read !== written) {
+    io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read, ${written} written${notes.length > 0 ? '; ' + notes.join('; ') : ''}\n`);
   }
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };

@@ -1,4 +1,5 @@
 import { Option, type Command } from 'commander';
+import { insertTraces } from '../../reverse/insert-traces.js';
 import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport, type RoundTripSample } from '../../evaluate/roundtrip.js';
 import { writeReport } from '../../report/write-report.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
@@ -51,16 +52,17 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   let report: RoundTripReport;
   let samples: RoundTripSample[] = [];
   const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
-  if (format === 'bracketed') {
+  if (format !== 'conllu') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to go to dependencies: --heads NAME'] };
-    const settings = conversionSettings(options);
+    // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces, whose restored reading it is.
+    const settings = conversionSettings(format === 'xml' ? { ...options, traces: 'restore' } : options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
     const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       number++;
       const wordless = trip.wordless;
-      trip.add(tree, tree.id ?? `${tree.file}-${number}`);
+      trip.add(tree.discontinuous ? insertTraces(tree).tree : tree, tree.id ?? `${tree.file}-${number}`);
       if (trip.wordless > wordless) reportWordlessTree(tree, problems.report);
     }
     report = trip.report();

@@ -58,7 +58,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   const format = commonFormat(inputs, options.from as InputFormat | undefined);
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
   let settings: ConversionSettings | undefined;
-  if (format === 'bracketed') {
+  if (format !== 'conllu') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to convert it first: --heads NAME'] };
     const loaded = conversionSettings(options);
     if ('problems' in loaded) return { code: ExitCode.UsageOrIO, messages: loaded.problems };

@@ -1,7 +1,9 @@
 import { Option, type Command } from 'commander';
 import { diagnose } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
-import { writeTree, type Layout } from '../../formats/bracketed/write-bracketed.js';
+import type { Layout } from '../../formats/bracketed/write-bracketed.js';
+import { countDiscontinuousPhrases } from '../../model/terminal-order.js';
+import { TreeSink, treeOutputFormat } from '../tree-output.js';
 import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
 import { decodeBrackets, decodeCarriedTrees } from '../../reverse/decode-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
@@ -14,12 +16,13 @@ import { readSentencesOf } from '../read-trees.js';
 export function registerToBrackets(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   program
     .command('to-brackets')
-    .description('rebuild bracketed trees from dependency trees in CoNLL-U; arcs that cannot be projective are lifted and marked with *ICH* traces')
+    .description('rebuild constituency trees from dependency trees in CoNLL-U: as bracketings, where arcs that cannot be projective are lifted and marked with *ICH* traces, or as XML graphs, where non-projective subtrees become discontinuous phrases')
     .argument('<files...>', 'CoNLL-U files, or - for standard input')
     .option('--categories <table>', 'category table: a name in headrules/ or a path', 'ud')
     .addOption(new Option('--shape <shape>', 'flat: one phrase per head; layered: one phrase level per dependent, nearest first').choices(['flat', 'layered']).default('flat'))
     .addOption(new Option('--pos <column>', 'the column that gives the part-of-speech brackets').choices(['upos', 'xpos']).default('upos'))
     .addOption(new Option('--layout <layout>', 'line: one tree per line; indented').choices(['line', 'indented']).default('line'))
+    .addOption(new Option('--to <format>', 'bracketed, or xml: the XML graph encoding, nothing lifted (default: by the output file\'s extension, .xml; else bracketed)').choices(['bracketed', 'xml']))
     .option('--lifts', 'report each sentence with lifted arcs on standard error')
     .option('--lossless', 'rebuild the bracketing carried by to-deps --lossless exactly, where a sentence carries one')
     .option('-o, --output <file>', 'write the bracketed trees to a file (default: standard output)')
@@ -29,7 +32,12 @@ export function registerToBrackets(program: Command, io: CliIO, done: (result: C
 async function toBrackets(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   let settings: BracketSettings;
   try {
-    settings = { categories: loadCategoryTable(options.categories as string), shape: options.shape as BracketSettings['shape'], pos: options.pos as BracketSettings['pos'] };
+    settings = {
+      categories: loadCategoryTable(options.categories as string),
+      shape: options.shape as BracketSettings['shape'],
+      pos: options.pos as BracketSettings['pos'],
+      discontinuous: treeOutputFormat(options.to, options.output) === 'xml',
+    };
   } catch (error) {
     if (!(error instanceof TableError)) throw error;
     return { code: ExitCode.UsageOrIO, messages: error.diagnostics.map((d) => formatDiagnostic(d)) };
@@ -38,7 +46,9 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   const output = Output.to(options.output as string | undefined, io);
   const problems = new ProblemPrinter(io);
   const report = problems.report;
+  const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), options.layout as Layout, report);
   let read = 0;
+  let discontinuous = 0;
   let written = 0;
   let lifted = 0;
   let liftedSentences = 0;
@@ -54,7 +64,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
         }
         continue;
       }
-      written++;
+      if (settings.discontinuous) discontinuous += countDiscontinuousPhrases(result.tree);
       if (result.lifts.length > 0) {
         lifted += result.lifts.length;
         liftedSentences++;
@@ -63,18 +73,23 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
           io.stderr.write(`${sentence.id ?? `sentence ${read}`}: lifted ${arcs}\n`);
         }
       }
-      const layout = { layout: options.layout as Layout };
       const before = carried ? decodeCarriedTrees(sentence, 'before') : [];
       const after = carried ? decodeCarriedTrees(sentence, 'after') : [];
       restored += before.length + after.length;
-      for (const tree of [...before, result.tree, ...after]) await output.write(writeTree(tree, layout));
+      for (const tree of before) await sink.write(tree);
+      if (await sink.write(result.tree)) written++;
+      for (const tree of after) await sink.write(tree);
     }
+    await sink.finish();
     await output.commit();
   } catch (error) {
     await output.abandon();
     throw error;
   }
-  io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}${restored > 0 ? `; ${restored} tree${restored === 1 ? '' : 's'} without words restored from comments` : ''}\n`);
+  const shape = settings.discontinuous
+    ? `${discontinuous} discontinuous phrase${discontinuous === 1 ? '' : 's'}`
+    : `${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}`;
+  io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${shape}${restored > 0 ? `; ${restored} tree${restored === 1 ? '' : 's'} without words restored from comments` : ''}\n`);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

@@ -1,12 +1,14 @@
 import { basename } from 'node:path';
 import type { Command } from 'commander';
+import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
+import { LineIndex } from '../../model/line-index.js';
 import { convertTree } from '../../convert/convert-tree.js';
 import { carryComment } from '../../convert/carry-wordless-trees.js';
 import type { Tree } from '../../model/constituency.js';
 import type { DependencySentence } from '../../model/dependency.js';
 import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
-import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
@@ -16,10 +18,11 @@ import { readTreesOf } from '../read-trees.js';
 export function registerToDeps(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
     .command('to-deps')
-    .description('convert bracketed trees to dependency trees in CoNLL-U')
-    .argument('<files...>', 'bracketed files, or - for standard input')
+    .description('convert constituency trees (bracketed, or XML graphs with discontinuous phrases) to dependency trees in CoNLL-U')
+    .argument('<files...>', 'bracketed or XML graph files, or - for standard input')
     .option('-o, --output <file>', 'write the CoNLL-U to a file (default: standard output)');
   addConversionOptions(command);
+  addTreeFormatOption(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await toDeps(files, options, io)));
 }
 
@@ -49,6 +52,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
       treeInFile++;
       const file = tree.file ?? '-';
       const id = tree.id ?? `${basename(file)}-${treeInFile}`;
+      if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, report);
       const conversion = convertTree(tree, settings, id, `${basename(file)}#${treeInFile}`);
       if (!conversion) {
         if (settings.lossless) wordless.push(tree);
@@ -80,4 +84,12 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read: ${converted} converted, ${carried > 0 ? `${carried} without words carried in comments, ` : ''}${skipped} skipped${notRead}\n`);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
+
+/** CoNLL-U basic trees have no place for secondary edges: each sentence that has some says how many are left out. */
+function reportSecondaryEdges(tree: Tree, report: Report): void {
+  const edges = tree.secondaryEdges!;
+  const lines = tree.source ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
+  const labels = [...new Set(edges.map((edge) => edge.label))].join(', ');
+  report(diagnose('secondary-edges-dropped', `sentence ${tree.id ?? '(no id)'}: ${edges.length} secondary edge${edges.length === 1 ? '' : 's'} (${labels}) left out of the dependency tree`, { file: tree.file ?? '-', offset: edges[0]!.position?.start ?? tree.position?.start ?? 0, lines }));
 }

@@ -1,0 +1,100 @@
+// The XML graph encoding on real corpora, with outside checks:
+// - Python's standard xml.etree.ElementTree (a reference library) parses every
+//   file we write, and test/support/xml-graph-check.py verifies each graph: one
+//   root, every edge target exists, every terminal reached exactly once, no cycles.
+// - IcePaHC (CC BY 4.0): bracketed → traces resolved into discontinuous phrases →
+//   XML → read back → to-deps gives, tree for tree, the dependencies that
+//   `to-deps --traces restore` gives on the bracketing.
+// - UD EWT and CAC dev (CC BY-SA 4.0) and GUM dep (CC BY 4.0): dependencies → XML
+//   (non-projective subtrees as discontinuous phrases) → `to-deps --heads ud` is
+//   exact for every sentence, and the number of discontinuous phrases equals the
+//   number of words of gap degree ≥ 1 (Kuhlmann & Nivre 2006) that `stats` counts.
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { readConlluText } from '../../src/formats/conllu/read-conllu.js';
+import { cli } from '../support/cli.js';
+import { corpusFiles, projectRoot, python } from '../support/corpora.js';
+
+interface GraphCheck {
+  sentences: number;
+  terminals: number;
+  nonterminals: number;
+  discontinuous: number;
+  problems: number;
+  examples: string[];
+}
+
+function checkWithElementTree(file: string): GraphCheck {
+  const script = join(projectRoot, 'test/support/xml-graph-check.py');
+  return JSON.parse(execFileSync(python, [script, file], { encoding: 'utf8', maxBuffer: 1 << 26 }));
+}
+
+/** Per sentence: the words' ids, forms, heads and relations. */
+function arcs(text: string): string[] {
+  return readConlluText(text, {}, () => undefined).map((s) =>
+    s.lines.filter((l) => l.type === 'word').map((l) => `${l.id}:${l.form}:${l.head}:${l.deprel}`).join(' '),
+  );
+}
+
+describe('IcePaHC through the XML graph encoding', () => {
+  it('converts to the same dependencies as restoring traces in the bracketing, tree for tree', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'treebridge-xml-'));
+    const files = corpusFiles('icepahc', '.psd');
+    const xml = join(dir, 'icepahc.xml');
+    const written = await cli(['rewrite', '--lemmas', '--traces', 'resolve', '-o', xml, ...files]);
+    expect(written.code).toBe(0);
+    const [, read, out, moved] = /(\d+) trees read, (\d+) written; (\d+) antecedents moved/.exec(written.stderr)!;
+    expect(out).toBe(read);
+
+    const check = checkWithElementTree(xml);
+    expect(check.examples).toEqual([]);
+    expect(check.sentences).toBe(Number(read));
+
+    const viaXml = join(dir, 'via-xml.conllu');
+    const restored = join(dir, 'restored.conllu');
+    expect((await cli(['to-deps', '--heads', 'penn-historical', '-o', viaXml, xml])).code).toBe(0);
+    expect((await cli(['to-deps', '--lemmas', '--heads', 'penn-historical', '--traces', 'restore', '-o', restored, ...files])).code).toBe(0);
+    const a = arcs(readFileSync(viaXml, 'utf8'));
+    const b = arcs(readFileSync(restored, 'utf8'));
+    expect(a.length).toBe(b.length);
+    const differing = a.filter((sentence, i) => sentence !== b[i]).length;
+    console.log(`IcePaHC: ${read} trees, ${moved} antecedents moved, ${check.discontinuous} discontinuous phrases; ${a.length} sentences converted, ${differing} differ`);
+    expect(differing).toBe(0);
+    expect(a.length).toBe(36_555);
+  });
+});
+
+describe.each([
+  ['UD', 'ud'],
+  ['GUM', 'gum/dep'],
+])('the %s dependency files through the XML graph encoding', (_name, folder) => {
+  it('come back with the same heads and relations, one discontinuous phrase per gapped word', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'treebridge-xml-'));
+    const files = corpusFiles(folder, '.conllu');
+    const xml = join(dir, 'graphs.xml');
+    const built = await cli(['to-brackets', '--to', 'xml', '-o', xml, ...files]);
+    expect(built.code).toBe(0);
+    const [, read, written, discontinuous] = /(\d+) sentences read: (\d+) written, 0 skipped; (\d+) discontinuous phrases?/.exec(built.stderr)!;
+    expect(written).toBe(read);
+
+    const check = checkWithElementTree(xml);
+    expect(check.examples).toEqual([]);
+    expect(check.sentences).toBe(Number(read));
+    expect(check.discontinuous).toBe(Number(discontinuous));
+
+    const stats = JSON.parse((await cli(['stats', '--json', ...files])).stdout);
+    expect(Number(discontinuous)).toBe(stats.gappedWords);
+
+    const back = join(dir, 'back.conllu');
+    expect((await cli(['to-deps', '--heads', 'ud', '-o', back, xml])).code).toBe(0);
+    const original = files.flatMap((file) => arcs(readFileSync(file, 'utf8')));
+    const again = arcs(readFileSync(back, 'utf8'));
+    expect(again.length).toBe(original.length);
+    const differing = again.filter((sentence, i) => sentence !== original[i]).length;
+    console.log(`${folder}: ${read} sentences, ${discontinuous} discontinuous phrases = ${stats.gappedWords} gapped words; ${differing} differ`);
+    expect(differing).toBe(0);
+  });
+});
