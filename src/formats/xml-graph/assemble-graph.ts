@@ -7,7 +7,8 @@ import type { LineIndex } from '../../model/line-index.js';
 import { sortByFirstTerminal } from '../../model/terminal-order.js';
 import { readEmptyLeaf } from '../bracketed/leaves.js';
 import type { EdgeRecord, NodeRecord, SentenceRecord } from './graph-records.js';
-import { ABSENT, EMPTY_POS, KIND, WRAPPER } from './xml-graph-names.js';
+import { ABSENT, EMPTY, EMPTY_POS, KIND, NOTE, NOTE_BRACKETS, WRAPPER } from './xml-graph-names.js';
+import { readBracketedText } from '../bracketed/read-bracketed.js';
 
 /** Attributes the model holds in fields of its own; every other attribute is kept in `attributes`. */
 const TERMINAL_FIELDS = new Set(['id', 'word', 'lemma', 'pos', KIND]);
@@ -159,14 +160,24 @@ function terminalNode(element: NodeRecord, order: number): ConstituentNode {
   const pos = attributes.get('pos') ?? ABSENT;
   const text = attributes.get('word') ?? '';
   const kind = attributes.get(KIND);
-  if (kind === 'empty' || (kind === undefined && pos === EMPTY_POS)) {
+  if (kind === EMPTY || (kind === undefined && pos === EMPTY_POS)) {
     // Read as the bracketed reader reads a leaf under -NONE-, so both give the same kind and index.
     const parts = readEmptyLeaf(text, EMPTY_POS, () => false) ?? { kind: text };
     const node: ConstituentNode = { type: 'empty', label: parseLabel(pos), text, kind: parts.kind, refIndex: parts.refIndex, order, position };
     if (xmlId !== undefined) node.xmlId = xmlId;
     return node;
   }
-  if (kind === 'note') {
+  if (kind === NOTE_BRACKETS) {
+    // The brackets of the note are read back by the bracketed reader; a note that does not parse stays text.
+    const [parsed] = readBracketedText(`(${pos} ${text})`, { keepMeta: true }, () => undefined);
+    const meta = parsed?.children[0];
+    if (meta?.type === 'meta' && meta.children.length > 0) {
+      const node: ConstituentNode = { type: 'meta', label: pos, children: withoutPositions(meta.children), order, position };
+      if (xmlId !== undefined) node.xmlId = xmlId;
+      return node;
+    }
+  }
+  if (kind === NOTE || kind === NOTE_BRACKETS) {
     const node: ConstituentNode = { type: 'meta', label: pos, text, children: [], order, position };
     if (xmlId !== undefined) node.xmlId = xmlId;
     return node;
@@ -205,4 +216,17 @@ function withEdgeLabel(node: ConstituentNode, edgeLabel: string | undefined): Co
   else if (node.type === 'preterminal') node.functions = functions;
   else if (node.type === 'empty') node.label = { ...node.label, functions: [...node.label.functions, ...functions] };
   return node;
+}
+
+/** Nodes parsed out of an attribute value have offsets into that value, not the file: they count as generated. */
+function withoutPositions(nodes: ConstituentNode[]): ConstituentNode[] {
+  return nodes.map((node) => {
+    const { position: _position, ...rest } = node;
+    if (rest.type === 'phrase' || rest.type === 'meta') return { ...rest, children: withoutPositions(rest.children) } as ConstituentNode;
+    if (rest.type === 'preterminal') {
+      const { position: _wordPosition, ...word } = rest.word;
+      return { ...rest, word } as ConstituentNode;
+    }
+    return rest as ConstituentNode;
+  });
 }

@@ -64,13 +64,13 @@ export class XmlGraphScanner {
   ) {
     const parser = sax.parser(true, { trim: false, normalize: false, xmlns: false, position: true });
     parser.onattribute = ({ name, value }) => {
-      if (this.attributes.has(name)) this.fail('xml-malformed', `attribute ${name} is given twice`, this.parser.position);
       this.attributes.set(name, value);
     };
     parser.onopentag = (tag) => this.open(tag.name, tag.isSelfClosing);
     parser.onclosetag = (name) => this.close(name);
-    parser.ondoctype = () =>
-      this.fail('xml-doctype', 'a document type declaration: treebridge reads no DTD and expands no entity it declares', this.tagStart(), [
+    parser.ondoctype = (declaration) =>
+      // The event comes at the closing `>`, after `<!DOCTYPE` and the declaration's text.
+      this.fail('xml-doctype', 'a document type declaration: treebridge reads no DTD and expands no entity it declares', this.parser.position - 1 - declaration.length - '<!DOCTYPE'.length, [
         'remove the <!DOCTYPE …> declaration; the graph encoding needs none',
       ]);
     parser.ontext = (text) => {
@@ -78,8 +78,15 @@ export class XmlGraphScanner {
     };
     parser.onerror = (error) => {
       const message = error.message.split('\n')[0]!;
-      const notes = /entity/i.test(message) ? ['only &lt; &gt; &amp; &quot; &apos; and character references (&#…;) are expanded'] : [];
-      this.fail('xml-malformed', `not well-formed XML: ${message.charAt(0).toLowerCase()}${message.slice(1)}`, Math.max(0, this.parser.position - 1), notes);
+      // The parser stops at the character that broke the rule; an entity or a closing tag is better shown from its start.
+      let offset = Math.max(0, this.parser.position - 1);
+      const notes: string[] = [];
+      if (/entity/i.test(message)) {
+        notes.push('only &lt; &gt; &amp; &quot; &apos; and character references (&#…;) are expanded');
+        const ampersand = this.kept.lastIndexOf('&', offset - this.keptStart.offset);
+        if (ampersand !== -1) offset = this.keptStart.offset + ampersand;
+      } else if (/close tag/i.test(message)) offset = this.tagStart();
+      this.fail('xml-malformed', `not well-formed XML: ${message.charAt(0).toLowerCase()}${message.slice(1)}`, offset, notes);
     };
     this.parser = parser;
   }
@@ -129,6 +136,7 @@ export class XmlGraphScanner {
     const attributes = this.attributes;
     this.attributes = new Map();
     const start = this.tagStart();
+    this.checkRepeatedAttributes(name, start, attributes.size);
     const parent = this.stack[this.stack.length - 1];
     if (!selfClosing) this.stack.push(name);
     if (this.stack.length > this.limits.maxDepth) {
@@ -181,8 +189,26 @@ export class XmlGraphScanner {
     }
   }
 
+  /**
+   * The parser keeps the first of two attributes with one name and drops the
+   * second without a word; XML forbids the repetition (Extensible Markup
+   * Language 1.0, §3.1), so the tag's own text is checked.
+   */
+  private checkRepeatedAttributes(name: string, start: number, kept: number): void {
+    const tag = this.kept.slice(start - this.keptStart.offset, this.parser.position - this.keptStart.offset);
+    let written = 0;
+    for (let at = tag.indexOf('='); at !== -1; at = tag.indexOf('=', at + 1)) written++;
+    if (written <= kept) return;
+    const names = [...tag.matchAll(/([^\s=<>"'/]+)\s*=\s*(?:"[^"]*"|'[^']*')/g)].map((match) => match[1]!);
+    const repeated = names.find((attribute, i) => names.indexOf(attribute) !== i);
+    if (repeated !== undefined) this.fail('xml-malformed', `attribute ${repeated} is given twice in <${name}>`, start);
+  }
+
   private finishSentence(end: number): void {
     const sentence = this.sentence!;
+    if (end - sentence.start > this.limits.maxSentenceLength) {
+      this.fail('xml-too-large', `sentence ${sentence.attributes.get('id') ?? '(no id)'} runs past ${this.limits.maxSentenceLength} characters`, sentence.start);
+    }
     sentence.end = end;
     sentence.lines = this.linesFor(sentence.start, end);
     this.sentences.push(sentence);

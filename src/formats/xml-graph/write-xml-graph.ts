@@ -1,17 +1,15 @@
-import xml2js from 'xml2js';
-import type { ConstituentNode, Tree } from '../../model/constituency.js';
+import type { ConstituentNode, Phrase, Tree } from '../../model/constituency.js';
 import { formatLabel } from '../../model/label.js';
 import { numberTerminals, terminalsInOrder, type Terminal } from '../../model/terminal-order.js';
 import { writeNode } from '../bracketed/write-bracketed.js';
-import { ABSENT, KIND, WRAPPER } from './xml-graph-names.js';
+import { ABSENT, KIND, NOTE, NOTE_BRACKETS, WRAPPER, EMPTY } from './xml-graph-names.js';
 
-/** xml2js builds elements from objects: `$` holds attributes, other keys child elements. */
-interface ElementObject {
-  $: Record<string, string>;
-  [child: string]: unknown;
+/** An element to write: its name, attributes in written order, and child elements. */
+interface Element {
+  name: string;
+  attributes: Array<[string, string]>;
+  children?: Element[];
 }
-
-const builder = new xml2js.Builder({ headless: true, renderOpts: { pretty: true, indent: '  ', newline: '\n' } });
 
 /** The start of a document, up to the first sentence. */
 export function xmlDocumentStart(): string {
@@ -33,11 +31,14 @@ export function xmlDocumentEnd(): string {
  * in attributes of ours (see xml-graph-names): empty elements and notes as
  * terminals with `kind`, the outer wrapper bracket as a nonterminal with
  * `kind="wrapper"`, coindex and gapping index as `coindex` and `gapindex`.
+ *
+ * Throws when a string holds a character XML 1.0 cannot carry (most control
+ * characters); callers report the tree.
  */
 export function writeXmlSentence(tree: Tree, ordinal: number): string {
   const numbered = numberTerminals(tree);
   const terminals = terminalsInOrder(numbered);
-  const phrases: ConstituentNode[] = [];
+  const phrases: Phrase[] = [];
   const collect = (node: ConstituentNode) => {
     if (node.type !== 'phrase') return;
     phrases.push(node);
@@ -46,101 +47,127 @@ export function writeXmlSentence(tree: Tree, ordinal: number): string {
   numbered.children.forEach(collect);
   const ids = idsFor(terminals, phrases, ordinal);
 
-  const secondary = new Map<ConstituentNode, ElementObject[]>();
+  const secondary = new Map<ConstituentNode, Element[]>();
   for (const edge of numbered.secondaryEdges ?? []) {
     const list = secondary.get(edge.from) ?? [];
-    list.push({ $: attributes([['label', edge.label], ['idref', ids.get(edge.to)!]]) });
+    list.push({ name: 'secedge', attributes: [['label', edge.label], ['idref', ids.get(edge.to)!]] });
     secondary.set(edge.from, list);
   }
-  const withSecondary = (element: ElementObject, node: ConstituentNode) => {
-    const edges = secondary.get(node);
-    if (edges) element.secedge = edges;
-    return element;
-  };
+  const secondaryOf = (node: ConstituentNode) => secondary.get(node) ?? [];
 
-  const nonterminals: ElementObject[] = phrases.map((node) => {
-    const phrase = node as Extract<ConstituentNode, { type: 'phrase' }>;
-    const pairs: Array<[string, string]> = [['id', ids.get(phrase)!], ['cat', phrase.label.category || '']];
-    if (phrase.label.coindex !== undefined) pairs.push(['coindex', String(phrase.label.coindex)]);
-    if (phrase.label.gapIndex !== undefined) pairs.push(['gapindex', String(phrase.label.gapIndex)]);
-    for (const entry of phrase.attributes ?? []) pairs.push(entry);
-    const element: ElementObject = { $: attributes(pairs), edge: phrase.children.map((child) => edgeTo(child, ids)) };
-    return withSecondary(element, phrase);
+  const nonterminals: Element[] = phrases.map((phrase) => {
+    const attributes: Array<[string, string]> = [['id', ids.get(phrase)!], ['cat', phrase.label.category]];
+    if (phrase.label.coindex !== undefined) attributes.push(['coindex', String(phrase.label.coindex)]);
+    if (phrase.label.gapIndex !== undefined) attributes.push(['gapindex', String(phrase.label.gapIndex)]);
+    attributes.push(...(phrase.attributes ?? []));
+    return { name: 'nt', attributes, children: [...phrase.children.map((child) => edgeTo(child, ids)), ...secondaryOf(phrase)] };
   });
   let root: string;
-  const wrapped = numbered.wrapper !== undefined || numbered.children.length !== 1;
-  if (wrapped) {
+  if (numbered.wrapper !== undefined || numbered.children.length !== 1) {
     root = `s${ordinal}_root`;
     nonterminals.unshift({
-      $: attributes([['id', root], ['cat', numbered.wrapper?.label ?? ''], [KIND, WRAPPER]]),
-      edge: numbered.children.map((child) => edgeTo(child, ids)),
+      name: 'nt',
+      attributes: [['id', root], ['cat', numbered.wrapper?.label ?? ''], [KIND, WRAPPER]],
+      children: numbered.children.map((child) => edgeTo(child, ids)),
     });
   } else root = ids.get(numbered.children[0]!)!;
 
-  const sentence: ElementObject = {
-    $: attributes([['id', numbered.id ?? `s${ordinal}`], ...(numbered.attributes ?? [])]),
-    graph: {
-      $: attributes([['root', root]]),
-      terminals: terminals.length > 0 ? { t: terminals.map((terminal) => withSecondary(terminalElement(terminal, ids), terminal)) } : '',
-      nonterminals: nonterminals.length > 0 ? { nt: nonterminals } : '',
-    },
+  const sentence: Element = {
+    name: 's',
+    attributes: [['id', numbered.id ?? `s${ordinal}`], ...(numbered.attributes ?? [])],
+    children: [
+      {
+        name: 'graph',
+        attributes: [['root', root]],
+        children: [
+          { name: 'terminals', attributes: [], children: terminals.map((terminal) => ({ ...terminalElement(terminal, ids), children: secondaryOf(terminal) })) },
+          { name: 'nonterminals', attributes: [], children: nonterminals },
+        ],
+      },
+    ],
   };
-  return builder.buildObject({ s: sentence }) + '\n';
+  const lines: string[] = [];
+  serialize(sentence, '', lines);
+  return lines.join('\n') + '\n';
 }
 
-function edgeTo(child: ConstituentNode, ids: Map<ConstituentNode, string>): ElementObject {
+function edgeTo(child: ConstituentNode, ids: Map<ConstituentNode, string>): Element {
   let functions: readonly string[] = [];
   if (child.type === 'phrase') functions = child.label.functions;
   else if (child.type === 'preterminal') functions = child.functions ?? [];
-  return { $: attributes([['label', functions.length > 0 ? functions.join('-') : ABSENT], ['idref', ids.get(child)!]]) };
+  return { name: 'edge', attributes: [['label', functions.length > 0 ? functions.join('-') : ABSENT], ['idref', ids.get(child)!]] };
 }
 
-function terminalElement(terminal: Terminal, ids: Map<ConstituentNode, string>): ElementObject {
+function terminalElement(terminal: Terminal, ids: Map<ConstituentNode, string>): Element {
   const id = ids.get(terminal)!;
   switch (terminal.type) {
     case 'preterminal': {
-      const pairs: Array<[string, string]> = [['id', id], ['word', terminal.word.form]];
-      if (terminal.word.lemma !== undefined) pairs.push(['lemma', terminal.word.lemma]);
-      pairs.push(['pos', terminal.pos]);
-      for (const entry of terminal.attributes ?? []) pairs.push(entry);
-      return { $: attributes(pairs) };
+      const attributes: Array<[string, string]> = [['id', id], ['word', terminal.word.form]];
+      if (terminal.word.lemma !== undefined) attributes.push(['lemma', terminal.word.lemma]);
+      attributes.push(['pos', terminal.pos], ...(terminal.attributes ?? []));
+      return { name: 't', attributes };
     }
     case 'empty':
-      return { $: attributes([['id', id], ['word', terminal.text], ['pos', formatLabel(terminal.label)], [KIND, 'empty']]) };
-    case 'meta': {
-      const text = terminal.text ?? terminal.children.map(writeNode).join(' ');
-      return { $: attributes([['id', id], ['word', text], ['pos', terminal.label], [KIND, 'note']]) };
-    }
+      return { name: 't', attributes: [['id', id], ['word', terminal.text], ['pos', formatLabel(terminal.label)], [KIND, EMPTY]] };
+    case 'meta':
+      // A note that holds brackets keeps them as bracketed text, read back by the bracketed reader.
+      if (terminal.children.length > 0) {
+        return { name: 't', attributes: [['id', id], ['word', terminal.children.map(writeNode).join(' ')], ['pos', terminal.label], [KIND, NOTE_BRACKETS]] };
+      }
+      return { name: 't', attributes: [['id', id], ['word', terminal.text ?? ''], ['pos', terminal.label], [KIND, NOTE]] };
   }
 }
 
 /** The ids read from the file when they are complete and unique, else ids made from the sentence's ordinal. */
-function idsFor(terminals: Terminal[], phrases: ConstituentNode[], ordinal: number): Map<ConstituentNode, string> {
+function idsFor(terminals: Terminal[], phrases: Phrase[], ordinal: number): Map<ConstituentNode, string> {
   const ids = new Map<ConstituentNode, string>();
-  const seen = new Set<string>();
-  let complete = true;
+  const seen = new Set<string>([`s${ordinal}_root`]);
   for (const node of [...terminals, ...phrases]) {
-    const id = node.type === 'phrase' || node.type === 'preterminal' || node.type === 'empty' || node.type === 'meta' ? node.xmlId : undefined;
-    if (id === undefined || seen.has(id) || id === `s${ordinal}_root`) {
-      complete = false;
-      break;
+    const id = node.xmlId;
+    if (id === undefined || seen.has(id)) {
+      ids.clear();
+      terminals.forEach((terminal, i) => ids.set(terminal, `s${ordinal}_${i + 1}`));
+      phrases.forEach((phrase, i) => ids.set(phrase, `s${ordinal}_p${i + 1}`));
+      return ids;
     }
     seen.add(id);
     ids.set(node, id);
   }
-  if (complete) return ids;
-  ids.clear();
-  terminals.forEach((terminal, i) => ids.set(terminal, `s${ordinal}_${i + 1}`));
-  phrases.forEach((phrase, i) => ids.set(phrase, `s${ordinal}_p${i + 1}`));
   return ids;
 }
 
 /**
- * An attribute object whose keys are own properties even when a name is
- * `__proto__`: assignment would set the object's prototype instead.
+ * Writes an element, two spaces deeper per level. Written here rather than
+ * through xml2js's builder: the builder keeps attributes in a plain object,
+ * where an attribute named `__proto__` (which a file may hold) vanishes.
  */
-function attributes(pairs: Iterable<[string, string]>): Record<string, string> {
-  const object: Record<string, string> = {};
-  for (const [name, value] of pairs) Object.defineProperty(object, name, { value, enumerable: true, writable: true, configurable: true });
-  return object;
+function serialize(element: Element, indent: string, lines: string[]): void {
+  let open = `${indent}<${element.name}`;
+  for (const [name, value] of element.attributes) open += ` ${name}="${escapeAttribute(value)}"`;
+  const children = element.children ?? [];
+  if (children.length === 0) {
+    lines.push(open + '/>');
+    return;
+  }
+  lines.push(open + '>');
+  for (const child of children) serialize(child, indent + '  ', lines);
+  lines.push(`${indent}</${element.name}>`);
+}
+
+/** Characters XML 1.0 cannot carry at all (Extensible Markup Language 1.0, §2.2 Char). */
+const FORBIDDEN = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+/** Escapes an attribute value; tab, line feed and carriage return as character references, so that attribute-value normalisation keeps them. */
+function escapeAttribute(value: string): string {
+  const forbidden = FORBIDDEN.exec(value);
+  if (forbidden) throw new Error(`U+${forbidden[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')} cannot be written in XML`);
+  if (!/[&<>"\t\n\r]/.test(value)) return value;
+  return value
+    .replace(/&/g, '&amp;')
+    .replace(/</g, '&lt;')
+    .replace(/>/g, '&gt;')
+    .replace(/"/g, '&quot;')
+    .replace(/\t/g, '&#9;')
+    .replace(/\n/g, '&#10;')
+    .replace(/\r/g, '&#13;');
 }

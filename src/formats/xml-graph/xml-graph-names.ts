@@ -16,3 +16,12 @@ export const KIND = 'kind';
 
 /** `kind` of the nonterminal that stands for a bracketing's outer wrapper bracket. */
 export const WRAPPER = 'wrapper';
+
+/** `kind` of a terminal that stands for an empty element (trace, empty subject …). */
+export const EMPTY = 'empty';
+
+/** `kind` of a terminal that stands for a note (`CODE`, `META`) with text. */
+export const NOTE = 'note';
+
+/** `kind` of a terminal that stands for a note holding brackets, kept as bracketed text in `word`. */
+export const NOTE_BRACKETS = 'note-brackets';
