@@ -1,5 +1,7 @@
 // The public library interface of treebridge. test/index.test.ts pins this list.
-export type { ConstituentNode, EmptyElement, MetaNode, Phrase, Preterminal, Tree, Word } from './model/constituency.js';
+export type { ConstituentNode, EmptyElement, MetaNode, Phrase, Preterminal, SecondaryEdge, Tree, Word } from './model/constituency.js';
+export type { Terminal } from './model/terminal-order.js';
+export { countDiscontinuousPhrases, terminalsInOrder } from './model/terminal-order.js';
 export type { Comment, ConlluColumns, DependencySentence, DependencyWord, EmptyNode, MultiwordToken } from './model/dependency.js';
 export type { Label } from './model/label.js';
 export { formatLabel, parseLabel } from './model/label.js';
@@ -21,6 +23,13 @@ export {
 export type { TreeBreaks } from './formats/bracketed/split-trees.js';
 export type { Layout, WriteOptions } from './formats/bracketed/write-bracketed.js';
 export { writeNode, writeTree } from './formats/bracketed/write-bracketed.js';
+export type { XmlReadOptions } from './formats/xml-graph/read-xml-graph.js';
+export { readXmlGraphFile, readXmlGraphs, readXmlGraphText } from './formats/xml-graph/read-xml-graph.js';
+export { writeXmlSentence, xmlDocumentEnd, xmlDocumentStart } from './formats/xml-graph/write-xml-graph.js';
+export type { Resolution } from './convert/resolve-traces.js';
+export { resolveTraces } from './convert/resolve-traces.js';
+export type { TraceInsertion } from './reverse/insert-traces.js';
+export { insertTraces } from './reverse/insert-traces.js';
 export type { ValidationSummary } from './validate/validate-bracketed.js';
 export { BracketedValidator } from './validate/validate-bracketed.js';
 export type { CliIO } from './cli/io.js';

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { random, randomTree } from '../support/random-trees.js';
 import { analyseTree } from '../../src/analysis/structure.js';
 
 /** Head vectors are written 1-based: `tree(0, 1, 1)` is word 1 the root with words 2 and 3 under it. */
@@ -83,23 +84,6 @@ function wellNestedByDefinition(heads: number[]): boolean {
     }
   }
   return true;
-}
-
-/** A seeded generator (mulberry32), so that a failure can be replayed. */
-function random(seed: number): () => number {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-/** A random tree over n words: words join, in a random order, under a word already placed. */
-function randomTree(next: () => number, n: number): number[] {
-  const order = Array.from({ length: n }, (_, i) => i + 1).sort(() => next() - 0.5);
-  const heads = new Array<number>(n + 1).fill(0);
-  order.forEach((word, i) => (heads[word] = i === 0 ? 0 : order[Math.floor(next() * i)]!));
-  return heads;
 }
 
 describe('structure of a dependency tree', () => {
