@@ -125,3 +125,34 @@ for (let round = 0; round < rounds; round++) {
 const bracketing = fastest(bracketRuns) as Measure & { words: number };
 console.log(`\nto-brackets on the same files (read + lift + build + write, flat shape; fastest of ${rounds}):`);
 console.log(row('treebridge to-brackets', conlluMB, bracketing) + `   (${Math.round(bracketing.words / bracketing.seconds).toLocaleString('en-US')} words/s)`);
+
+// The XML graph encoding: IcePaHC with traces resolved, written as one document and read back;
+// beside it, Python's standard xml.etree.ElementTree (a reference library) parsing the same document.
+{
+  const dir = mkdtempSync(join(tmpdir(), 'treebridge-bench-xml-'));
+  try {
+    const xml = join(dir, 'icepahc.xml');
+    const writeRuns: Measure[] = [];
+    const readRuns: Measure[] = [];
+    const parseRuns: Measure[] = [];
+    const worker = (args: string[]): Measure =>
+      JSON.parse(execFileSync(process.execPath, [...nodeFlags, join(here, 'xml-worker.js'), ...args], { encoding: 'utf8', maxBuffer: 1 << 24 }));
+    for (let round = 0; round < rounds; round++) {
+      writeRuns.push(worker(['write', xml, ...files]));
+      readRuns.push(worker(['read', xml]));
+      parseRuns.push(JSON.parse(execFileSync(python, [join(root, 'test/support/xml-graph-check.py'), '--time', xml], { encoding: 'utf8' })));
+    }
+    const xmlMB = statSync(xml).size / 1048576;
+    const written = fastest(writeRuns);
+    const read = fastest(readRuns);
+    const parsed = fastest(parseRuns);
+    console.log(`\nXML graph encoding: IcePaHC with traces resolved, ${xmlMB.toFixed(1)} MB of XML (fastest of ${rounds}):`);
+    console.log(`${'step'.padEnd(30)} ${'trees'.padStart(8)} ${'seconds'.padStart(8)} ${'MB/s'.padStart(7)} ${'trees/s'.padStart(9)} ${'peak MB'.padStart(8)}`);
+    console.log(row('treebridge resolve + write', xmlMB, written));
+    console.log(row('treebridge read', xmlMB, read));
+    console.log(row('ElementTree iterparse only', xmlMB, parsed));
+    console.log(`reading builds the trees in ${(read.seconds / parsed.seconds).toFixed(2)}x the time Python's ElementTree takes only to parse the same XML`);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}

@@ -6,10 +6,25 @@ no cycles. Prints one JSON object per file with counts and the problems found
 (at most 20 listed).
 
 Usage: python3 xml-graph-check.py FILE...
+       python3 xml-graph-check.py --time FILE   (parse only; prints trees, seconds, peak memory)
 """
 import json
+import resource
 import sys
+import time
 import xml.etree.ElementTree as ET
+
+
+def time_parse(path):
+    started = time.perf_counter()
+    sentences = 0
+    for _event, element in ET.iterparse(path, events=('end',)):
+        if element.tag == 's':
+            sentences += 1
+            element.clear()
+    seconds = time.perf_counter() - started
+    peak = resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024
+    print(json.dumps({'trees': sentences, 'seconds': seconds, 'peakMB': peak}))
 
 
 def check_sentence(s, problems):
@@ -77,6 +92,10 @@ def check_sentence(s, problems):
             discontinuous += 1
     return len(terminals), len(nonterminals), discontinuous
 
+
+if sys.argv[1:2] == ['--time']:
+    time_parse(sys.argv[2])
+    sys.exit(0)
 
 for path in sys.argv[1:]:
     problems = []

@@ -93,21 +93,26 @@ export function assembleGraph(record: SentenceRecord, file: string, lines: LineI
   }
   if (parentOf.has(rootEntry.node)) problem('graph-cycle', `the root ${record.root} is itself the child of ${idOf(parentOf.get(rootEntry.node)!.parent)}`, rootEntry.record.start);
   if (failed) return undefined;
+  // Following parents from any node must end at a node without parent; a cycle never does.
+  // Depths found on one walk serve the later ones, so each node is walked once.
+  const depthOf = new Map<ConstituentNode, number>();
   for (const [id, { record: element, node }] of byId) {
-    // Following parents from any node must end at a node without parent; a cycle never does.
-    const seen = new Set<ConstituentNode>();
+    const path: ConstituentNode[] = [];
+    const onPath = new Set<ConstituentNode>();
     let current: ConstituentNode | undefined = node;
-    let depth = 0;
-    while (current && !seen.has(current)) {
-      seen.add(current);
-      current = parentOf.get(current)?.parent;
-      if (++depth > MAX_GRAPH_DEPTH) {
-        problem('xml-too-deep', `node ${id} lies more than ${MAX_GRAPH_DEPTH} levels deep`, element.start);
+    while (current && !depthOf.has(current)) {
+      if (onPath.has(current)) {
+        problem('graph-cycle', `node ${id} is its own ancestor through its edges`, element.start);
         return undefined;
       }
+      path.push(current);
+      onPath.add(current);
+      current = parentOf.get(current)?.parent;
     }
-    if (current) {
-      problem('graph-cycle', `node ${id} is its own ancestor through its edges`, element.start);
+    let depth = current ? depthOf.get(current)! : -1;
+    for (let i = path.length - 1; i >= 0; i--) depthOf.set(path[i]!, ++depth);
+    if (depth > MAX_GRAPH_DEPTH) {
+      problem('xml-too-deep', `node ${id} lies more than ${MAX_GRAPH_DEPTH} levels deep`, element.start);
       return undefined;
     }
   }

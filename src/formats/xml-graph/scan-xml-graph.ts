@@ -127,9 +127,21 @@ export class XmlGraphScanner {
 
   /** Lines and columns for a stretch of the text still kept. */
   linesFor(start: number, end: number): LineIndex {
-    const whole = new LineIndex(this.kept, this.keptStart);
     const from = Math.max(start, this.keptStart.offset);
-    return new LineIndex(this.kept.slice(from - this.keptStart.offset, end - this.keptStart.offset), whole.pointAt(from));
+    return new LineIndex(this.kept.slice(from - this.keptStart.offset, end - this.keptStart.offset), this.pointAt(from));
+  }
+
+  /** The line and column of an offset in the kept text, counting only the text before it (not the whole kept stretch). */
+  private pointAt(offset: number): Point {
+    const length = offset - this.keptStart.offset;
+    let line = this.keptStart.line;
+    let lastBreak = -1;
+    for (let at = this.kept.indexOf('\n'); at !== -1 && at < length; at = this.kept.indexOf('\n', at + 1)) {
+      line++;
+      lastBreak = at;
+    }
+    const column = lastBreak === -1 ? this.keptStart.column + length : length - lastBreak;
+    return { offset, line, column };
   }
 
   private open(name: string, selfClosing: boolean): void {
@@ -223,7 +235,7 @@ export class XmlGraphScanner {
   /** Drops kept text before an offset, so that memory holds one sentence at a time. */
   private dropKeptBefore(offset: number): void {
     if (offset <= this.keptStart.offset) return;
-    const point = new LineIndex(this.kept, this.keptStart).pointAt(offset);
+    const point = this.pointAt(offset);
     this.kept = this.kept.slice(offset - this.keptStart.offset);
     this.keptStart = point;
   }

@@ -119,3 +119,14 @@ describe('broken XML and broken graphs', () => {
     expect(result.problems).toEqual(['graph-unattached 3:114']);
   });
 });
+
+describe('graphs too deep for the passes that walk them', () => {
+  it('refuses a chain of nonterminals deeper than 2,000 levels, without exhausting the stack', () => {
+    const n = 2100;
+    const nts = Array.from({ length: n }, (_, i) => `<nt id="n${i}" cat="X"><edge label="--" idref="${i + 1 < n ? `n${i + 1}` : 't'}"/></nt>`).join('');
+    const result = read(document(`<s id="deep"><graph root="n0"><terminals><t id="t" word="x" pos="N"/></terminals><nonterminals>${nts}</nonterminals></graph></s>\n`, good('b')));
+    expect(result.ids).toEqual(['b']);
+    expect(result.problems).toHaveLength(1);
+    expect(result.problems[0]).toMatch(/^xml-too-deep 3:\d+$/);
+  });
+});
