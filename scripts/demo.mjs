@@ -76,6 +76,26 @@ const steps = [
     args: ['roundtrip', '--lossless', '--heads', 'en-content', 'demo-data/harbour.psd'],
     expect: 0,
   },
+  {
+    say: 'Traces resolved: each antecedent becomes a discontinuous child where its trace stood, written in the XML graph encoding.',
+    args: ['rewrite', '--traces', 'resolve', '-o', 'demo-output/harbour.xml', 'demo-data/harbour.psd'],
+    expect: 0,
+  },
+  {
+    say: 'The XML graphs convert without traces to the same dependencies as restoring traces in the bracketing.',
+    args: ['to-deps', '--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb', '-o', 'demo-output/harbour-from-xml.conllu', 'demo-output/harbour.xml'],
+    expect: 0,
+  },
+  {
+    say: 'The crossing dependency tree as an XML graph: the non-projective subtree is one discontinuous phrase, nothing lifted.',
+    args: ['to-brackets', '--to', 'xml', 'demo-data/crossing.conllu'],
+    expect: 0,
+  },
+  {
+    say: 'And an XML graph back to a bracketing: the discontinuous phrase is cut, an *ICH* trace marks where its part belongs.',
+    args: ['rewrite', 'demo-data/ferry-graphs.xml'],
+    expect: 0,
+  },
 ];
 
 let failed = false;
