@@ -68,6 +68,31 @@ describe('IcePaHC through the XML graph encoding', () => {
 });
 
 describe.each([
+  ['IcePaHC', 'icepahc', '.psd', ['--lemmas']],
+  ['GUM', 'gum/const', '.ptb', []],
+])('%s bracketings through the XML graph encoding, traces kept', (_name, folder, extension, options) => {
+  it('come back byte for byte as rewrite writes them, and validate without errors', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'treebridge-xml-'));
+    const files = corpusFiles(folder, extension);
+    const xml = join(dir, 'plain.xml');
+    expect((await cli(['rewrite', ...options, '-o', xml, ...files])).code).toBe(0);
+    const check = checkWithElementTree(xml);
+    expect(check.examples).toEqual([]);
+    const validated = JSON.parse((await cli(['validate', '--json', xml])).stdout);
+    expect(validated.errors).toBe(0);
+    const back = await cli(['rewrite', xml]);
+    const direct = await cli(['rewrite', ...options, ...files]);
+    expect(back.code).toBe(0);
+    const a = back.stdout.split('\n');
+    const b = direct.stdout.split('\n');
+    expect(a.length).toBe(b.length);
+    const differing = a.filter((line, i) => line !== b[i]).length;
+    console.log(`${folder}: ${check.sentences} trees through XML and back, ${differing} lines differ; validate: ${validated.errors} errors, ${validated.warnings} warnings`);
+    expect(differing).toBe(0);
+  });
+});
+
+describe.each([
   ['UD', 'ud'],
   ['GUM', 'gum/dep'],
 ])('the %s dependency files through the XML graph encoding', (_name, folder) => {

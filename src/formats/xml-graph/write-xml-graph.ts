@@ -74,7 +74,8 @@ export function writeXmlSentence(tree: Tree, ordinal: number): string {
 
   const sentence: Element = {
     name: 's',
-    attributes: [['id', numbered.id ?? `s${ordinal}`], ...(numbered.attributes ?? [])],
+    // A tree without an identifier gets none here either, so that it reads back as it was.
+    attributes: [...(numbered.id === undefined ? [] : [['id', numbered.id] as [string, string]]), ...(numbered.attributes ?? [])],
     children: [
       {
         name: 'graph',
