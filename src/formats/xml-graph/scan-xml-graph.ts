@@ -28,6 +28,9 @@ const PARENTS: ReadonlyMap<string, readonly string[]> = new Map([
   ['secedge', ['t', 'nt']],
 ]);
 
+/** Names of properties every JavaScript object has, which code keying objects by name would trip over. */
+const OBJECT_NAMES: ReadonlySet<string> = new Set(['__proto__', 'constructor', 'prototype']);
+
 /** Thrown inside sax handlers to stop reading a file after a fatal problem; never leaves this module. */
 class StopFile extends Error {}
 
@@ -149,6 +152,7 @@ export class XmlGraphScanner {
     this.attributes = new Map();
     const start = this.tagStart();
     this.checkRepeatedAttributes(name, start, attributes.size);
+    this.noteObjectNames(name, start, attributes);
     const parent = this.stack[this.stack.length - 1];
     if (!selfClosing) this.stack.push(name);
     if (this.stack.length > this.limits.maxDepth) {
@@ -214,6 +218,20 @@ export class XmlGraphScanner {
     const names = [...tag.matchAll(/([^\s=<>"'/]+)\s*=\s*(?:"[^"]*"|'[^']*')/g)].map((match) => match[1]!);
     const repeated = names.find((attribute, i) => names.indexOf(attribute) !== i);
     if (repeated !== undefined) this.fail('xml-malformed', `attribute ${repeated} is given twice in <${name}>`, start);
+  }
+
+  /**
+   * Names such as `__proto__` are legal XML and harmless here (attributes live
+   * in Maps), but in a corpus they are a mistake or an attack on readers that
+   * key objects by name: they are reported, and kept as plain data.
+   */
+  private noteObjectNames(name: string, start: number, attributes: Map<string, string>): void {
+    for (const [attribute, value] of attributes) {
+      if (OBJECT_NAMES.has(attribute)) this.warn('xml-object-name', `attribute ${attribute} of <${name}> is kept as plain data`, start);
+      else if ((attribute === 'id' || attribute === 'idref' || attribute === 'root') && OBJECT_NAMES.has(value)) {
+        this.warn('xml-object-name', `${attribute}="${value}" of <${name}> is kept as plain data`, start);
+      }
+    }
   }
 
   private finishSentence(end: number): void {

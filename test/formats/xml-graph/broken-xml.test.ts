@@ -44,9 +44,10 @@ describe('hostile XML', () => {
     expect(result.messages[0]).toMatch(/in sentence b; the rest of the file is not read/);
   });
 
-  it('keeps attributes named __proto__ and constructor as data', () => {
+  it('keeps attributes named __proto__ and constructor as data, and says so', () => {
     const result = read(document(good('a').replace('pos="NNS"', 'pos="NNS" __proto__="polluted" constructor="x"')));
-    expect(result.problems).toEqual([]);
+    expect(result.problems).toEqual(['xml-object-name 3:40', 'xml-object-name 3:40']);
+    expect(result.messages[0]).toMatch(/attribute __proto__ of <t> is kept as plain data/);
     expect(result.ids).toEqual(['a']);
   });
 

@@ -28,8 +28,14 @@ const words = (tree: Tree) => terminalsInOrder(tree).map((t) => (t.type === 'pre
 describe('reading the XML graph encoding', () => {
   const { trees, problems } = read(readFileSync(join(fixtures, 'xml-graph/ferry-graphs.xml'), 'utf8'));
 
-  it('reads every sentence of the hand-written fixture without problems', () => {
-    expect(problems).toEqual([]);
+  it('reads every sentence of the hand-written fixture, noting the names that look like object properties', () => {
+    expect(problems.map((p) => `${p.code} ${p.line}:${p.column}`)).toEqual([
+      'xml-object-name 12:7',
+      'xml-object-name 44:3',
+      'xml-object-name 46:7',
+      'xml-object-name 50:7',
+      'xml-object-name 51:9',
+    ]);
     expect(trees.map((t) => t.id)).toEqual(['ferry.1', 'ferry.2']);
     expect(words(trees[0]!)).toBe('A ferry arrived that nobody expected .');
   });
@@ -67,7 +73,7 @@ describe('reading the XML graph encoding', () => {
   it('writes what it read, and reads what it wrote, the same (read → write identity)', () => {
     const written = writeAll(trees);
     const again = read(written);
-    expect(again.problems).toEqual([]);
+    expect(again.problems.filter((p) => p.code !== 'xml-object-name')).toEqual([]);
     expect(writeAll(again.trees)).toBe(written);
     expect(written).toContain('__proto__="polluted"');
     expect(written).toContain('<secedge label="OB" idref="f1_p2"/>');
