@@ -37,6 +37,7 @@ export class TreeSink {
   /** Writes a tree; false when it could not be written (and was reported). */
   async write(tree: Tree): Promise<boolean> {
     if (this.format === 'bracketed') {
+      if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, 'bracketing', this.report);
       const mended = insertTraces(tree);
       this.tracesInserted += mended.traces;
       await this.output.write(writeTree(mended.tree, { layout: this.layout }));
@@ -69,4 +70,13 @@ export class TreeSink {
     this.opened = true;
     await this.output.write(xmlDocumentStart());
   }
+}
+
+/** A bracketing or a basic dependency tree has no place for secondary edges: each sentence that has some says how many are left out. */
+export function reportSecondaryEdges(tree: Tree, into: string, report: Report): void {
+  const edges = tree.secondaryEdges!;
+  const lines = tree.source ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
+  const labels = [...new Set(edges.map((edge) => edge.label))].join(', ');
+  const offset = edges[0]!.position?.start ?? tree.position?.start ?? 0;
+  report(diagnose('secondary-edges-dropped', `sentence ${tree.id ?? '(no id)'}: ${edges.length} secondary edge${edges.length === 1 ? '' : 's'} (${labels}) left out of the ${into}`, { file: tree.file ?? '-', offset, lines }));
 }

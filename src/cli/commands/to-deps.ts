@@ -1,7 +1,6 @@
 import { basename } from 'node:path';
 import type { Command } from 'commander';
-import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
-import { LineIndex } from '../../model/line-index.js';
+import { reportSecondaryEdges } from '../tree-output.js';
 import { convertTree } from '../../convert/convert-tree.js';
 import { carryComment } from '../../convert/carry-wordless-trees.js';
 import type { Tree } from '../../model/constituency.js';
@@ -52,7 +51,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
       treeInFile++;
       const file = tree.file ?? '-';
       const id = tree.id ?? `${basename(file)}-${treeInFile}`;
-      if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, report);
+      if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, 'dependency tree', report);
       const conversion = convertTree(tree, settings, id, `${basename(file)}#${treeInFile}`);
       if (!conversion) {
         if (settings.lossless) wordless.push(tree);
@@ -86,10 +85,3 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
 
-/** CoNLL-U basic trees have no place for secondary edges: each sentence that has some says how many are left out. */
-function reportSecondaryEdges(tree: Tree, report: Report): void {
-  const edges = tree.secondaryEdges!;
-  const lines = tree.source ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
-  const labels = [...new Set(edges.map((edge) => edge.label))].join(', ');
-  report(diagnose('secondary-edges-dropped', `sentence ${tree.id ?? '(no id)'}: ${edges.length} secondary edge${edges.length === 1 ? '' : 's'} (${labels}) left out of the dependency tree`, { file: tree.file ?? '-', offset: edges[0]!.position?.start ?? tree.position?.start ?? 0, lines }));
-}

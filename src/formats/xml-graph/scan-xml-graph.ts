@@ -88,7 +88,7 @@ export class XmlGraphScanner {
         notes.push('only &lt; &gt; &amp; &quot; &apos; and character references (&#…;) are expanded');
         const ampersand = this.kept.lastIndexOf('&', offset - this.keptStart.offset);
         if (ampersand !== -1) offset = this.keptStart.offset + ampersand;
-      } else if (/close tag/i.test(message)) offset = this.tagStart();
+      } else if (/close tag|unencoded </i.test(message)) offset = this.tagStart();
       this.fail('xml-malformed', `not well-formed XML: ${message.charAt(0).toLowerCase()}${message.slice(1)}`, offset, notes);
     };
     this.parser = parser;
@@ -289,10 +289,12 @@ export class XmlGraphScanner {
 
   /** Reports a problem after which the file is not read further, and stops. */
   private fail(code: DiagnosticCode, message: string, offset: number, notes: string[] = []): never {
-    const within = this.sentence ? [`in sentence ${this.sentence.attributes.get('id') ?? '(no id)'}; the rest of the file is not read`] : ['the rest of the file is not read'];
+    const element = this.node ? `, element <${this.node.element} id="${this.node.attributes.get('id') ?? ''}">` : '';
+    const within = this.sentence ? [`in sentence ${this.sentence.attributes.get('id') ?? '(no id)'}${element}; the rest of the file is not read`] : ['the rest of the file is not read'];
     this.report(diagnose(code, message, { file: this.file, offset, lines: this.linesFor(offset, this.received) }, [...notes, ...within]));
     this.stopped = true;
     this.sentence = undefined;
+    this.node = undefined;
     throw new StopFile();
   }
 }

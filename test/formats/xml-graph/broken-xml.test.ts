@@ -86,6 +86,13 @@ describe('broken XML and broken graphs', () => {
     expect(result.ids).toEqual([]);
   });
 
+  it('names the sentence and the element a broken piece of XML stands in', () => {
+    const result = read(document(good('a').replace('<edge label="--" idref="a_2"/>', '<edge label="--" idref="a_2"/> < ')));
+    // The stray '<' stands at column 223, after the second edge (columns 192–221) and a space.
+    expect(result.problems).toEqual(['xml-malformed 3:223']);
+    expect(result.messages[0]).toMatch(/in sentence a, element <nt id="a_p">; the rest of the file is not read/);
+  });
+
   it('reports a dangling idref with the sentence and element, and reads the next sentence', () => {
     const result = read(document(good('a').replace('idref="a_2"', 'idref="a_9"'), good('b')));
     expect(result.ids).toEqual(['b']);
