@@ -39,7 +39,7 @@ describe('treebridge stats', () => {
     expect([surface.sentences, surface.words, surface.nonProjectiveSentences]).toEqual([25, 216, 0]);
     expect(restored.nonProjectiveSentences).toBeGreaterThan(0);
     const without = await cli(['stats', demo]);
-    expect([without.code, without.stderr]).toEqual([2, 'treebridge: bracketed input needs a head table to convert it first: --heads NAME\n']);
+    expect([without.code, without.stderr]).toEqual([2, 'treebridge: constituency trees (bracketed or XML graphs) need a head table to convert them first: --heads NAME\n']);
   });
 
   it('reports a sentence that is not a tree on standard error, leaves it out and exits 1', async () => {

@@ -53,7 +53,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   let samples: RoundTripSample[] = [];
   const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
   if (format !== 'conllu') {
-    if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to go to dependencies: --heads NAME'] };
+    if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['constituency trees (bracketed or XML graphs) need a head table to go to dependencies: --heads NAME'] };
     // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces, whose restored reading it is.
     const settings = conversionSettings(format === 'xml' ? { ...options, traces: 'restore' } : options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };

@@ -59,7 +59,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
   let settings: ConversionSettings | undefined;
   if (format !== 'conllu') {
-    if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['bracketed input needs a head table to convert it first: --heads NAME'] };
+    if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['constituency trees (bracketed or XML graphs) need a head table to convert them first: --heads NAME'] };
     const loaded = conversionSettings(options);
     if ('problems' in loaded) return { code: ExitCode.UsageOrIO, messages: loaded.problems };
     settings = loaded;
