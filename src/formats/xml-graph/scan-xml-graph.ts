@@ -1,4 +1,5 @@
-import sax from 'sax';
+import type { SAXParser } from 'sax';
+import xml2js from 'xml2js';
 import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
 import type { DiagnosticCode } from '../../diagnostics/codes.js';
 import { LineIndex } from '../../model/line-index.js';
@@ -31,6 +32,21 @@ const PARENTS: ReadonlyMap<string, readonly string[]> = new Map([
 /** Names of properties every JavaScript object has, which code keying objects by name would trip over. */
 const OBJECT_NAMES: ReadonlySet<string> = new Set(['__proto__', 'constructor', 'prototype']);
 
+/**
+ * The strict sax parser an xml2js parser sets up (text neither trimmed nor
+ * normalised, no namespace processing), with xml2js's own handlers taken off:
+ * they would build objects keyed by element and attribute names. Ours are
+ * set by the scanner.
+ */
+function xml2jsSaxParser(): SAXParser {
+  const host = new xml2js.Parser({ strict: true, xmlns: false }) as unknown as { saxParser: SAXParser };
+  const parser = host.saxParser;
+  for (const handler of ['oncdata', 'onclosetag', 'onend', 'onerror', 'onopentag', 'ontext'] as const) {
+    (parser as unknown as Record<string, unknown>)[handler] = undefined;
+  }
+  return parser;
+}
+
 /** Thrown inside sax handlers to stop reading a file after a fatal problem; never leaves this module. */
 class StopFile extends Error {}
 
@@ -47,7 +63,7 @@ class StopFile extends Error {}
  * plain objects in which a `__proto__` attribute would vanish.
  */
 export class XmlGraphScanner {
-  private readonly parser: sax.SAXParser;
+  private readonly parser: SAXParser;
   private readonly sentences: SentenceRecord[] = [];
   private readonly stack: string[] = [];
   private attributes = new Map<string, string>();
@@ -65,7 +81,7 @@ export class XmlGraphScanner {
     private readonly report: Report,
     private readonly limits: XmlLimits = defaultXmlLimits,
   ) {
-    const parser = sax.parser(true, { trim: false, normalize: false, xmlns: false, position: true });
+    const parser = xml2jsSaxParser();
     parser.onattribute = ({ name, value }) => {
       this.attributes.set(name, value);
     };
@@ -76,7 +92,7 @@ export class XmlGraphScanner {
       this.fail('xml-doctype', 'a document type declaration: treebridge reads no DTD and expands no entity it declares', this.parser.position - 1 - declaration.length - '<!DOCTYPE'.length, [
         'remove the <!DOCTYPE …> declaration; the graph encoding needs none',
       ]);
-    parser.ontext = (text) => {
+    parser.ontext = parser.oncdata = (text) => {
       if (this.sentence && text.trim() !== '') this.warn('xml-unexpected-content', `text ${JSON.stringify(text.trim().slice(0, 20))} inside a sentence is ignored`, this.parser.position - text.length);
     };
     parser.onerror = (error) => {

@@ -120,6 +120,12 @@ describe('broken XML and broken graphs', () => {
     expect(result.problems.map((p) => p.split(' ')[0])).toEqual(['graph-several-parents', 'graph-duplicate-id', 'graph-dangling-idref', 'graph-no-root']);
   });
 
+  it('warns about text and CDATA inside a sentence, which the encoding does not have', () => {
+    const result = read(document(good('a').replace('<graph', 'stray<![CDATA[more]]><graph')));
+    expect(result.ids).toEqual(['a']);
+    expect(result.problems.map((p) => p.split(' ')[0])).toEqual(['xml-unexpected-content', 'xml-unexpected-content']);
+  });
+
   it('hangs a terminal that no edge reaches under the root, with a warning', () => {
     const loose = good('a').replace('</terminals>', '<t id="a_3" word="." pos="."/></terminals>');
     const result = read(document(loose));
