@@ -145,6 +145,8 @@ export interface Tree {
   discontinuous?: boolean;
   /** Further attributes of the sentence element of the XML graph encoding, by name in written order. */
   attributes?: ReadonlyMap<string, string>;
+  /** Attributes of the graph element besides its root (`discontinuous` …), in written order. */
+  graphAttributes?: ReadonlyMap<string, string>;
   /** Secondary edges of the XML graph encoding: extra labelled links the tree itself cannot hold. */
   secondaryEdges?: SecondaryEdge[];
 }

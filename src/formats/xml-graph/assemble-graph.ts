@@ -144,6 +144,7 @@ export function assembleGraph(record: SentenceRecord, file: string, lines: LineI
   if (sentenceId !== undefined) tree.id = sentenceId;
   const extra = new Map([...record.attributes].filter(([name]) => name !== 'id'));
   if (extra.size > 0) tree.attributes = extra;
+  if (record.graphAttributes.size > 0) tree.graphAttributes = record.graphAttributes;
   if (secondaryEdges.length > 0) tree.secondaryEdges = secondaryEdges;
   return tree;
 }

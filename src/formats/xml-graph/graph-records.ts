@@ -37,6 +37,8 @@ export interface SentenceRecord {
   attributes: Map<string, string>;
   /** The `root` attribute of its `graph`; absent when there is none. */
   root: string | undefined;
+  /** The other attributes of its `graph` element (`discontinuous` …). */
+  graphAttributes: Map<string, string>;
   /** File offset of the `graph` element (or of the `s` when it has none). */
   graphStart: number;
   /** Terminals in written order, which is sentence order. */

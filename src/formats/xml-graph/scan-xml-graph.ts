@@ -177,7 +177,7 @@ export class XmlGraphScanner {
     if (name === 's') {
       if (this.sentence) this.fail('xml-malformed', `a sentence inside sentence ${this.sentence.attributes.get('id') ?? '(no id)'}`, start);
       this.dropKeptBefore(start);
-      const record: SentenceRecord = { attributes, root: undefined, graphStart: start, terminals: [], nonterminals: [], start, end: start, lines: undefined };
+      const record: SentenceRecord = { attributes, root: undefined, graphAttributes: new Map(), graphStart: start, terminals: [], nonterminals: [], start, end: start, lines: undefined };
       this.sentence = record;
       if (selfClosing) this.finishSentence(this.parser.position);
       return;
@@ -192,6 +192,8 @@ export class XmlGraphScanner {
     switch (name) {
       case 'graph':
         sentence.root = attributes.get('root');
+        attributes.delete('root');
+        sentence.graphAttributes = attributes;
         sentence.graphStart = start;
         break;
       case 't':

@@ -79,7 +79,7 @@ export function writeXmlSentence(tree: Tree, ordinal: number): string {
     children: [
       {
         name: 'graph',
-        attributes: [['root', root]],
+        attributes: [['root', root], ...(numbered.graphAttributes ?? [])],
         children: [
           { name: 'terminals', attributes: [], children: terminals.map((terminal) => ({ ...terminalElement(terminal, ids), children: secondaryOf(terminal) })) },
           { name: 'nonterminals', attributes: [], children: nonterminals },

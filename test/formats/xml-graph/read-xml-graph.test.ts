@@ -56,6 +56,7 @@ describe('reading the XML graph encoding', () => {
     expect(ferry.word.lemma).toBe('ferry');
     expect([...ferry.attributes!]).toEqual([['morph', 'sg'], ['__proto__', 'polluted']]);
     expect(tree.attributes && [...tree.attributes]).toEqual([['source', 'log']]);
+    expect(tree.graphAttributes && [...tree.graphAttributes]).toEqual([['discontinuous', 'true']]);
     expect(tree.secondaryEdges).toHaveLength(1);
     const edge = tree.secondaryEdges![0]!;
     expect(edge.label).toBe('OB');
@@ -76,6 +77,7 @@ describe('reading the XML graph encoding', () => {
     expect(again.problems.filter((p) => p.code !== 'xml-object-name')).toEqual([]);
     expect(writeAll(again.trees)).toBe(written);
     expect(written).toContain('__proto__="polluted"');
+    expect(written).toContain('<graph root="f1_p1" discontinuous="true">');
     expect(written).toContain('<secedge label="OB" idref="f1_p2"/>');
     expect(written).toContain('<t id="__proto__" word="Gulls" pos="NNS"/>');
   });
