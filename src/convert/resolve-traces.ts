@@ -23,9 +23,12 @@ export interface Resolution {
  * have only one parent.
  *
  * The input is not changed: every phrase is copied, and the copies' terminals
- * carry `order`. A tree that is already discontinuous is resolved the same way.
+ * carry `order`; a tree without moving traces comes back as it is. A tree
+ * that is already discontinuous is resolved the same way.
  */
 export function resolveTraces(tree: Tree): Resolution {
+  // Most trees have no moving trace: they need no copy.
+  if (!tree.children.some(holdsMovingTrace)) return { tree, moved: 0 };
   const copy = numberTerminals(tree);
   const antecedents = new Map<number, { node: Phrase; parent: Phrase | Tree }>();
   const traces: Array<{ trace: EmptyElement; parent: Phrase }> = [];
@@ -75,6 +78,11 @@ export function resolveTraces(tree: Tree): Resolution {
   // The traces that moved left holes in the numbering.
   renumberTerminals(copy);
   return { tree: copy, moved: moved.size };
+}
+
+function holdsMovingTrace(node: ConstituentNode): boolean {
+  if (node.type === 'empty') return node.refIndex !== undefined && MOVING_TRACES.has(node.kind.toUpperCase());
+  return node.type === 'phrase' && node.children.some(holdsMovingTrace);
 }
 
 function hasWords(node: ConstituentNode): boolean {

@@ -84,4 +84,3 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
-
