@@ -10,6 +10,12 @@ export interface Resolution {
   tree: Tree;
   /** How many antecedents moved to their trace. */
   moved: number;
+  /**
+   * Moving traces left in place because their antecedent had already moved to
+   * an earlier trace (a word has one parent). Such a trace is not stable:
+   * resolving the result again, or its bracketing, may move another phrase to it.
+   */
+  leftover: number;
 }
 
 /**
@@ -28,7 +34,7 @@ export interface Resolution {
  */
 export function resolveTraces(tree: Tree): Resolution {
   // Most trees have no moving trace: they need no copy.
-  if (!tree.children.some(holdsMovingTrace)) return { tree, moved: 0 };
+  if (!tree.children.some(holdsMovingTrace)) return { tree, moved: 0, leftover: 0 };
   const copy = numberTerminals(tree);
   const antecedents = new Map<number, { node: Phrase; parent: Phrase | Tree }>();
   const traces: Array<{ trace: EmptyElement; parent: Phrase }> = [];
@@ -53,7 +59,10 @@ export function resolveTraces(tree: Tree): Resolution {
     parent.children[parent.children.indexOf(trace)] = antecedent.node;
     antecedent.parent = parent;
   }
-  if (moved.size === 0) return { tree: copy, moved: 0 };
+  const leftover = traces.filter(
+    ({ trace, parent }) => moved.has(trace.refIndex!) && parent.children.includes(trace) && !contains(antecedents.get(trace.refIndex!)!.node, trace),
+  ).length;
+  if (moved.size === 0) return { tree: copy, moved: 0, leftover: 0 };
   // A moved antecedent keeps its coindex only while something else still points to it.
   const stillPointed = new Set<number>();
   const collect = (node: ConstituentNode) => {
@@ -77,7 +86,7 @@ export function resolveTraces(tree: Tree): Resolution {
   copy.discontinuous = true;
   // The traces that moved left holes in the numbering.
   renumberTerminals(copy);
-  return { tree: copy, moved: moved.size };
+  return { tree: copy, moved: moved.size, leftover };
 }
 
 function holdsMovingTrace(node: ConstituentNode): boolean {

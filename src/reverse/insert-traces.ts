@@ -18,10 +18,12 @@ export interface TraceInsertion {
  * parent, gets a fresh coindex n, and leaves `(-NONE- *ICH*-n)` beside the run
  * it was cut from (before it or after it, as the child stood), following the
  * convention for "interpret constituent here" (Bies et al. 1995, from
- * memory). A child that already moved once moves on without a second trace,
- * so each moved phrase has exactly one. A word moved on its own is wrapped in
- * a phrase named after its tag, as only phrases carry coindices. Resolving
- * the traces of the result gives the discontinuous tree back.
+ * memory). A phrase that carries a coindex already (because other traces
+ * still point to it) keeps it, and its trace takes that index. A child that
+ * already moved once moves on without a second trace, so each moved phrase
+ * has exactly one. A word moved on its own is wrapped in a phrase named after
+ * its tag, as only phrases carry coindices. Resolving the traces of the
+ * result gives the discontinuous tree back.
  *
  * A tree that is not discontinuous comes back as it is.
  */
@@ -46,15 +48,17 @@ export function insertTraces(tree: Tree): TraceInsertion {
     const after = leaving.filter((child) => firstOf(child) > last);
     node.children = [...kept.children];
     for (const child of leaving) {
-      const isFirstMove = !moved.has(child);
-      const outgoing = isFirstMove ? coindexed(child, nextIndex) : child;
-      if (isFirstMove) {
+      let outgoing = child;
+      if (!moved.has(child)) {
+        const antecedent = coindexed(child, nextIndex);
+        outgoing = antecedent;
         // The trace stands just outside the kept run, on the side the child came from.
         const side = before.includes(child) ? before : after;
         const k = side.indexOf(child);
         const order = side === before ? first - 1 + (k + 1) / (before.length + 1) : last + (k + 1) / (after.length + 1);
-        node.children.push(traceTo(nextIndex, order));
-        nextIndex++;
+        const index = antecedent.label.coindex!;
+        node.children.push(traceTo(index, order));
+        if (index === nextIndex) nextIndex++;
         traces++;
       }
       moved.add(outgoing);
@@ -99,9 +103,12 @@ function firstOf(node: ConstituentNode): number {
   return spanOf(node).from;
 }
 
-/** The node with coindex n: a phrase gets it on its label, anything else is wrapped in a phrase that carries it. */
+/**
+ * The node with a coindex: a phrase that has one keeps it, another phrase
+ * gets n on its label, and anything else is wrapped in a phrase that carries n.
+ */
 function coindexed(node: ConstituentNode, index: number): Phrase {
-  if (node.type === 'phrase') return { ...node, label: { ...node.label, coindex: index } };
+  if (node.type === 'phrase') return node.label.coindex === undefined ? { ...node, label: { ...node.label, coindex: index } } : node;
   let category = 'X';
   if (node.type === 'preterminal') category = parseLabel(node.pos).category;
   else if (node.type === 'empty') category = node.label.category;

@@ -36,6 +36,7 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
   let read = 0;
   let written = 0;
   let moved = 0;
+  let leftover = 0;
   try {
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
       read++;
@@ -43,6 +44,7 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
       if (options.traces === 'resolve') {
         const resolution = resolveTraces(tree);
         moved += resolution.moved;
+        leftover += resolution.leftover;
         resolved = resolution.tree;
       }
       if (await sink.write(resolved)) written++;
@@ -55,6 +57,7 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
   }
   const notes = [
     options.traces === 'resolve' ? `${moved} antecedent${moved === 1 ? '' : 's'} moved to their traces` : '',
+    leftover > 0 ? `${leftover} further trace${leftover === 1 ? '' : 's'} of an antecedent that had moved already left as empty element${leftover === 1 ? '' : 's'}` : '',
     sink.tracesInserted > 0 ? `${sink.tracesInserted} *ICH* trace${sink.tracesInserted === 1 ? '' : 's'} put in for discontinuous phrases` : '',
   ].filter(Boolean);
   if (options.traces === 'resolve' || sink.tracesInserted > 0 || read !== written) {
