@@ -51,7 +51,7 @@ export function assembleGraph(record: SentenceRecord, file: string, lines: LineI
   // Edges: each node gets at most one parent.
   const parentOf = new Map<ConstituentNode, { parent: ConstituentNode; edge: EdgeRecord }>();
   const secondaryEdges: SecondaryEdge[] = [];
-  for (const element of [...record.terminals, ...record.nonterminals]) {
+  for (const element of record.nonterminals.length === 0 ? record.terminals : record.terminals.concat(record.nonterminals)) {
     const id = element.attributes.get('id');
     const from = id === undefined ? undefined : byId.get(id);
     if (!from || from.record !== element) continue;
@@ -95,19 +95,20 @@ export function assembleGraph(record: SentenceRecord, file: string, lines: LineI
   if (failed) return undefined;
   // Following parents from any node must end at a node without parent; a cycle never does.
   // Depths found on one walk serve the later ones, so each node is walked once.
+  const ON_PATH = -1;
   const depthOf = new Map<ConstituentNode, number>();
   for (const [id, { record: element, node }] of byId) {
+    if (depthOf.has(node)) continue;
     const path: ConstituentNode[] = [];
-    const onPath = new Set<ConstituentNode>();
     let current: ConstituentNode | undefined = node;
     while (current && !depthOf.has(current)) {
-      if (onPath.has(current)) {
-        problem('graph-cycle', `node ${id} is its own ancestor through its edges`, element.start);
-        return undefined;
-      }
+      depthOf.set(current, ON_PATH);
       path.push(current);
-      onPath.add(current);
       current = parentOf.get(current)?.parent;
+    }
+    if (current && depthOf.get(current) === ON_PATH) {
+      problem('graph-cycle', `node ${id} is its own ancestor through its edges`, element.start);
+      return undefined;
     }
     let depth = current ? depthOf.get(current)! : -1;
     for (let i = path.length - 1; i >= 0; i--) depthOf.set(path[i]!, ++depth);
@@ -117,7 +118,8 @@ export function assembleGraph(record: SentenceRecord, file: string, lines: LineI
     }
   }
   const root = rootEntry.node;
-  const unattached = [...byId.entries()].filter(([, entry]) => entry.node !== root && !parentOf.has(entry.node));
+  const unattached: Array<[string, { record: NodeRecord; node: ConstituentNode }]> = [];
+  for (const entry of byId) if (entry[1].node !== root && !parentOf.has(entry[1].node)) unattached.push(entry);
   if (unattached.length > 0) {
     if (root.type !== 'phrase') {
       problem('graph-unattached', `${unattached.length} node(s) hang from no edge, and the root is a terminal`, unattached[0]![1].record.start);

@@ -245,6 +245,8 @@ export class XmlGraphScanner {
    */
   private noteObjectNames(name: string, start: number, attributes: Map<string, string>): void {
     for (const [attribute, value] of attributes) {
+      // Every such name is 9 or 11 characters long: most attributes and values are settled by length.
+      if (attribute.length !== 9 && attribute.length !== 11 && value.length !== 9 && value.length !== 11) continue;
       if (OBJECT_NAMES.has(attribute)) this.warn('xml-object-name', `attribute ${attribute} of <${name}> is kept as plain data`, start);
       else if ((attribute === 'id' || attribute === 'idref' || attribute === 'root') && OBJECT_NAMES.has(value)) {
         this.warn('xml-object-name', `${attribute}="${value}" of <${name}> is kept as plain data`, start);
