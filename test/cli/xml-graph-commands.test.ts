@@ -73,6 +73,13 @@ describe('the XML graph encoding on the command line', () => {
     expect(result.stdout).toMatch(/^-:2:\d+: error: not well-formed XML/);
   });
 
+  it('says so when a file read as XML is a bracketing', async () => {
+    const result = await cli(['validate', '--source', '--from', 'xml', harbour]);
+    expect(result.code).toBe(1);
+    expect(result.stdout).toMatch(/harbour\.psd:1:1: error: not well-formed XML: non-whitespace before first tag/);
+    expect(result.stdout).toMatch(/this looks like a bracketed file: read it with --from bracketed/);
+  });
+
   it('reports a tree with a character XML cannot hold and writes the others', async () => {
     const result = await cli(['rewrite', '--to', 'xml', '-'], { stdin: '( (S (NN bad\u0001word)) (ID a))\n( (S (NN good)) (ID b))\n' });
     expect(result.code).toBe(1);

@@ -105,6 +105,9 @@ export class XmlGraphScanner {
         const ampersand = this.kept.lastIndexOf('&', offset - this.keptStart.offset);
         if (ampersand !== -1) offset = this.keptStart.offset + ampersand;
       } else if (/close tag|unencoded </i.test(message)) offset = this.tagStart();
+      else if (/before first tag/i.test(message) && this.kept.trimStart().startsWith('(')) {
+        notes.push('this looks like a bracketed file: read it with --from bracketed, or give it another extension than .xml');
+      }
       this.fail('xml-malformed', `not well-formed XML: ${message.charAt(0).toLowerCase()}${message.slice(1)}`, offset, notes);
     };
     this.parser = parser;
