@@ -1,6 +1,6 @@
+import { tableErrorLines } from './print-problems.js';
 import { Option, type Command } from 'commander';
 import type { ConversionSettings } from '../convert/convert-tree.js';
-import { formatDiagnostic } from '../diagnostics/format-diagnostic.js';
 import { loadHeadTable, loadLabelTable, TableError } from '../tables/load-table.js';
 import { loadPosMap } from '../tables/load-pos-map.js';
 
@@ -31,6 +31,6 @@ export function conversionSettings(options: Record<string, unknown>): Conversion
     };
   } catch (error) {
     if (!(error instanceof TableError)) throw error;
-    return { problems: error.diagnostics.map((d) => formatDiagnostic(d, { source: true })) };
+    return { problems: tableErrorLines(error) };
   }
 }

@@ -9,6 +9,7 @@ import { registerValidate } from './commands/validate.js';
 import { ExitCode, type CommandResult } from './exit-codes.js';
 import { describeError, OutputError, type CliIO } from './io.js';
 import { version } from '../version.js';
+import { stopStatusLine } from './progress.js';
 
 /**
  * Runs treebridge with the given arguments (without `node` and the script) and
@@ -46,6 +47,7 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
     }
     await program.parseAsync(argv, { from: 'user' });
   } catch (error) {
+    stopStatusLine(io);
     if (error instanceof CommanderError) {
       const informational = ['commander.helpDisplayed', 'commander.version', 'commander.help'];
       return informational.includes(error.code) ? ExitCode.Ok : ExitCode.UsageOrIO;
@@ -53,6 +55,8 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
     io.stderr.write(`treebridge: ${error instanceof OutputError ? error.message : describeError(error)}\n`);
     return ExitCode.UsageOrIO;
   }
+  // A bar left drawing would keep its timer, and the process, alive.
+  stopStatusLine(io);
   for (const message of result.messages ?? []) io.stderr.write(`treebridge: ${message}\n`);
   return result.code;
 }

@@ -1,5 +1,5 @@
-import { diagnose, type Report } from '../diagnostics/diagnostic.js';
-import { writeTree, type Layout } from '../formats/bracketed/write-bracketed.js';
+import { diagnose, diagnoseItem, type Report } from '../diagnostics/diagnostic.js';
+import { unwritableReason, writeTree, type Layout } from '../formats/bracketed/write-bracketed.js';
 import { writeXmlSentence, xmlDocumentEnd, xmlDocumentStart } from '../formats/xml-graph/write-xml-graph.js';
 import { insertTraces } from '../reverse/insert-traces.js';
 import type { Tree } from '../model/constituency.js';
@@ -39,6 +39,12 @@ export class TreeSink {
     if (this.format === 'bracketed') {
       if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, 'bracketing', this.report);
       const mended = insertTraces(tree);
+      // A label or word a bracketing cannot hold would read back as other words: the tree is reported instead.
+      const reason = unwritableReason(mended.tree);
+      if (reason) {
+        this.report(diagnoseItem('unwritable-tree', `tree ${tree.id ?? '(no id)'} cannot be written as a bracketing: ${reason}`, tree));
+        return false;
+      }
       this.tracesInserted += mended.traces;
       await this.output.write(writeTree(mended.tree, { layout: this.layout }));
       return true;

@@ -1,5 +1,5 @@
 import type { HeadTable } from '../tables/table-model.js';
-import { headWordOf, type ConversionNode, type PhraseNode, type WordNode } from './conversion-tree.js';
+import { headWordOf, phrasesBottomUp, phrasesTopDown, type ConversionNode, type PhraseNode, type WordNode } from './conversion-tree.js';
 import { candidateOf } from './find-heads.js';
 import { coordinationAttachments, type CoordinationStyle } from './handle-coordination.js';
 
@@ -11,10 +11,10 @@ export type PunctuationPolicy = 'phrase' | 'root';
  * non-finite clause under a verb phrase attaches to that verb phrase's head.
  */
 function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: NonNullable<HeadTable['raising']>): void {
-  const visit = (phrase: PhraseNode) => {
+  // Lowest clauses first, as a raised subject may raise again from the phrase above.
+  for (const phrase of phrasesBottomUp(root)) {
     for (const child of phrase.children) {
       if (child.kind !== 'phrase') continue;
-      visit(child);
       if (!rule.under(candidateOf(phrase)) || !rule.clause(candidateOf(child))) continue;
       const candidates = child.children.map(candidateOf);
       if (candidates.some((c) => rule.without(c))) continue;
@@ -25,8 +25,7 @@ function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: No
       const headNode = phrase.children[phrase.head?.child ?? 0]!;
       attachments[word.index - 1] = { dependent: word, governor: headWordOf(phrase), node: subject, parent: phrase, headNode, role: 'raised' };
     }
-  };
-  if (root.kind === 'phrase') visit(root);
+  }
 }
 
 /** A word's attachment to its head word, with what the label table looks at. */
@@ -59,7 +58,7 @@ export function attachDependents(
   const attachments: Attachment[] = new Array(words.length);
   const top = headWordOf(root);
   attachments[top.index - 1] = { dependent: top, governor: null, node: root, parent: null, headNode: null, role: 'other' };
-  const visit = (phrase: PhraseNode) => {
+  for (const phrase of phrasesTopDown(root)) {
     const children = phrase.children;
     const headIndex = phrase.head?.child ?? 0;
     const plan =
@@ -72,10 +71,8 @@ export function attachDependents(
         const target = children[plan[i]!.to]!;
         attachments[dependent.index - 1] = { dependent, governor: headWordOf(target), node: child, parent: phrase, headNode: target, role: plan[i]!.role };
       }
-      if (child.kind === 'phrase') visit(child);
     });
-  };
-  if (root.kind === 'phrase') visit(root);
+  }
   if (table.raising) raiseSubjects(root, attachments, table.raising);
   if (punctuation === 'root') {
     for (const attachment of attachments) {

@@ -5,6 +5,7 @@
  * prepare-tree; find-heads fills `head`.
  */
 import type { Phrase, Preterminal } from '../model/constituency.js';
+import { postOrder, preOrder } from '../model/traverse.js';
 
 /** A word of the sentence. */
 export interface WordNode {
@@ -59,4 +60,18 @@ export function headWordOf(node: ConversionNode): WordNode {
   let current: ConversionNode = node;
   while (current.kind === 'phrase') current = current.children[current.head?.child ?? 0]!;
   return current;
+}
+
+function childrenOf(node: ConversionNode): ConversionNode[] | undefined {
+  return node.kind === 'phrase' ? node.children : undefined;
+}
+
+/** The phrases under (and including) a node, innermost first, left to right. */
+export function phrasesBottomUp(root: ConversionNode): PhraseNode[] {
+  return postOrder([root], childrenOf).filter((node): node is PhraseNode => node.kind === 'phrase');
+}
+
+/** The phrases under (and including) a node, outermost first, left to right. */
+export function phrasesTopDown(root: ConversionNode): PhraseNode[] {
+  return preOrder([root], childrenOf).filter((node): node is PhraseNode => node.kind === 'phrase');
 }

@@ -5,6 +5,7 @@ import { findHeads } from './find-heads.js';
 import { prepareTree } from './prepare-tree.js';
 import type { ConversionSettings } from './convert-tree.js';
 import type { ConversionNode } from './conversion-tree.js';
+import { nodesTopDown, preOrder } from '../model/traverse.js';
 
 /**
  * Lossless mode: what a bracketing needs to come back exactly, carried in
@@ -30,15 +31,10 @@ export function encodeBrackets(tree: Tree, settings: ConversionSettings): { word
   findHeads(prepared.root, settings.heads, settings.coordination);
   const headOfPhrase = new Map<Phrase, number>();
   const indexOfWord = new Map<Preterminal, number>();
-  const visit = (node: ConversionNode) => {
-    if (node.kind === 'word') {
-      indexOfWord.set(node.source, node.index);
-      return;
-    }
-    if (node.source) headOfPhrase.set(node.source, node.headWord!.index);
-    node.children.forEach(visit);
-  };
-  visit(prepared.root);
+  for (const node of preOrder<ConversionNode>([prepared.root], (n) => (n.kind === 'phrase' ? n.children : undefined))) {
+    if (node.kind === 'word') indexOfWord.set(node.source, node.index);
+    else if (node.source) headOfPhrase.set(node.source, node.headWord!.index);
+  }
   const headOf = (node: ConstituentNode): number | undefined =>
     node.type === 'preterminal' ? indexOfWord.get(node) : node.type === 'phrase' ? headOfPhrase.get(node) : undefined;
   const chains: string[][] = prepared.words.map(() => []);
@@ -47,16 +43,13 @@ export function encodeBrackets(tree: Tree, settings: ConversionSettings): { word
     if (index === undefined) return `n${escape(writeNode(child))}`;
     return index === head ? 'h' : `d${index}`;
   };
-  const walk = (node: ConstituentNode) => {
-    if (node.type !== 'phrase') return;
+  for (const node of nodesTopDown(tree.children)) {
+    if (node.type !== 'phrase') continue;
     const head = headOfPhrase.get(node);
-    if (head !== undefined) {
-      const children = node.children.map((child) => item(child, head));
-      chains[head - 1]!.push(`${escape(formatLabel(node.label))}{${children.join(',')}}`);
-    }
-    node.children.forEach(walk);
-  };
-  tree.children.forEach(walk);
+    if (head === undefined) continue;
+    const children = node.children.map((child) => item(child, head));
+    chains[head - 1]!.push(`${escape(formatLabel(node.label))}{${children.join(',')}}`);
+  }
   const top = tree.children.map((child) => item(child, undefined)).join(',');
   const wrapper = tree.wrapper ? `wrapper=${escape(tree.wrapper.label)}` : 'wrapper';
   const id = tree.id === undefined ? 'id=no' : 'id=yes';

@@ -1,6 +1,6 @@
 import type { Candidate } from '../tables/label-pattern.js';
 import type { HeadBlock, HeadStep, HeadTable } from '../tables/table-model.js';
-import { headWordOf, type ConversionNode, type HeadChoice, type PhraseNode } from './conversion-tree.js';
+import { headWordOf, phrasesBottomUp, type ConversionNode, type HeadChoice, type PhraseNode } from './conversion-tree.js';
 import { coordinationHead, findCoordination, type CoordinationStyle } from './handle-coordination.js';
 
 /** A node as head-table patterns see it: its label and its head word (heads below it already found). */
@@ -22,10 +22,11 @@ export function findHeads(
   style: CoordinationStyle = 'table',
   oracle?: (phrase: PhraseNode) => number | undefined,
 ): void {
-  if (root.kind !== 'phrase') return;
-  for (const child of root.children) findHeads(child, table, style, oracle);
-  root.head = decideHead(root, table, style, oracle);
-  root.headWord = headWordOf(root.children[root.head.child]!);
+  // Innermost first, so that every child's head word is known when its phrase is decided.
+  for (const phrase of phrasesBottomUp(root)) {
+    phrase.head = decideHead(phrase, table, style, oracle);
+    phrase.headWord = headWordOf(phrase.children[phrase.head.child]!);
+  }
 }
 
 function decideHead(

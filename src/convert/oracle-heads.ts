@@ -4,16 +4,31 @@ import type { ConversionNode, PhraseNode } from './conversion-tree.js';
  * Head choice by a gold tree, for measuring the ceiling of head percolation:
  * in every phrase, the child holding the phrase's gold head, that is the word
  * of the phrase whose gold head lies outside it (the first, if several do).
- * `goldHeads[i]` is the gold head of word i (1-based).
+ * `goldHeads[i]` is the gold head of word i (1-based). Phrases are asked
+ * innermost first (find-heads does so), so each child's words are known when
+ * its phrase is asked; nothing recurses over depth.
  */
 export function oracleChooser(goldHeads: readonly number[]): (phrase: PhraseNode) => number | undefined {
+  const wordsOf = new Map<ConversionNode, number[]>();
+  const words = (node: ConversionNode): number[] => {
+    if (node.kind === 'word') return [node.index];
+    const known = wordsOf.get(node);
+    if (known) return known;
+    // A phrase asked before its children (not the find-heads order) gathers them with a stack.
+    const found: number[] = [];
+    const stack: ConversionNode[] = [node];
+    while (stack.length > 0) {
+      const next = stack.pop()!;
+      if (next.kind === 'word') found.push(next.index);
+      else stack.push(...next.children);
+    }
+    return found;
+  };
   return (phrase) => {
+    const byChild = phrase.children.map(words);
     const inside = new Set<number>();
-    const collect = (node: ConversionNode) => {
-      if (node.kind === 'word') inside.add(node.index);
-      else node.children.forEach(collect);
-    };
-    collect(phrase);
+    for (const list of byChild) for (const word of list) inside.add(word);
+    wordsOf.set(phrase, [...inside]);
     let headWord: number | undefined;
     for (const word of [...inside].sort((a, b) => a - b)) {
       if (!inside.has(goldHeads[word] ?? 0)) {
@@ -22,11 +37,6 @@ export function oracleChooser(goldHeads: readonly number[]): (phrase: PhraseNode
       }
     }
     if (headWord === undefined) return undefined;
-    return phrase.children.findIndex((child) => {
-      const words = new Set<number>();
-      const gather = (node: ConversionNode) => (node.kind === 'word' ? words.add(node.index) : node.children.forEach(gather));
-      gather(child);
-      return words.has(headWord!);
-    });
+    return byChild.findIndex((list) => list.includes(headWord!));
   };
 }

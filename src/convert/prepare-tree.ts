@@ -2,6 +2,7 @@ import type { ConstituentNode, Tree } from '../model/constituency.js';
 import { formatLabel, parseLabel } from '../model/label.js';
 import type { ConversionNode, WordNode } from './conversion-tree.js';
 import { resolveTraces } from './resolve-traces.js';
+import { postOrder, rebuildBottomUp } from '../model/traverse.js';
 
 /** How traces are treated: where phrases stand, or where their traces stand. */
 export type TraceMode = 'surface' | 'restore';
@@ -20,7 +21,7 @@ export type TraceMode = 'surface' | 'restore';
 export function prepareTree(tree: Tree, traces: TraceMode): { root: ConversionNode; words: WordNode[] } | undefined {
   const source = traces === 'restore' ? resolveTraces(tree).tree : tree;
   const words: WordNode[] = [];
-  const top = source.children.map((child) => build(child, words)).filter((node): node is ConversionNode => node !== undefined);
+  const top = build(source.children, words);
   if (top.length === 0) return undefined;
   const root: ConversionNode =
     top.length === 1
@@ -35,56 +36,65 @@ export function prepareTree(tree: Tree, traces: TraceMode): { root: ConversionNo
   return { root, words };
 }
 
-/** Builds the conversion node of a tree node; undefined when it holds no word. */
-function build(node: ConstituentNode, words: WordNode[]): ConversionNode | undefined {
-  switch (node.type) {
-    case 'preterminal': {
-      const label = parseLabel(node.pos);
-      const word: WordNode = {
-        kind: 'word',
-        // In a discontinuous tree the order stands in until the words are renumbered.
-        index: node.word.order ?? words.length + 1,
-        category: label.category,
-        functions: node.functions ? [...label.functions, ...node.functions] : label.functions,
-        pos: node.pos,
-        form: node.word.form,
-        lemma: node.word.lemma,
-        source: node,
-      };
-      words.push(word);
-      return word;
-    }
-    case 'empty':
-    case 'meta':
-      return undefined;
-    case 'phrase': {
-      const children: ConversionNode[] = [];
-      for (const child of node.children) {
-        const built = build(child, words);
-        if (built) children.push(built);
+/**
+ * Builds the conversion nodes of tree nodes, bottom-up without recursion;
+ * nodes that hold no word are left out. Words are numbered as they come, left to right.
+ */
+function build(nodes: ConstituentNode[], words: WordNode[]): ConversionNode[] {
+  return rebuildBottomUp<ConstituentNode, ConversionNode>(
+    nodes,
+    (node) => (node.type === 'phrase' ? node.children : undefined),
+    (node, children) => {
+      switch (node.type) {
+        case 'preterminal': {
+          const label = parseLabel(node.pos);
+          const word: WordNode = {
+            kind: 'word',
+            // In a discontinuous tree the order stands in until the words are renumbered.
+            index: node.word.order ?? words.length + 1,
+            category: label.category,
+            functions: node.functions ? [...label.functions, ...node.functions] : label.functions,
+            pos: node.pos,
+            form: node.word.form,
+            lemma: node.word.lemma,
+            source: node,
+          };
+          words.push(word);
+          return word;
+        }
+        case 'empty':
+        case 'meta':
+          return undefined;
+        case 'phrase':
+          if (children.length === 0) return undefined;
+          // Every field find-heads fills is there from the start, so that phrases keep one shape.
+          return {
+            kind: 'phrase',
+            category: node.label.category,
+            functions: node.label.functions,
+            label: formatLabel(node.label),
+            children,
+            head: undefined,
+            headWord: undefined,
+            coordination: undefined,
+            source: node,
+          };
       }
-      if (children.length === 0) return undefined;
-      // Every field find-heads fills is there from the start, so that phrases keep one shape.
-      return {
-        kind: 'phrase',
-        category: node.label.category,
-        functions: node.label.functions,
-        label: formatLabel(node.label),
-        children,
-        head: undefined,
-        headWord: undefined,
-        coordination: undefined,
-        source: node,
-      };
-    }
-  }
+    },
+  );
 }
 
-/** Puts children in the order of their first word, deepest phrases first; returns the node's first word index. */
-function sortByFirstWord(node: ConversionNode): number {
-  if (node.kind === 'word') return node.index;
-  const keyed = node.children.map((child) => ({ child, first: sortByFirstWord(child) }));
-  keyed.sort((a, b) => a.first - b.first);
-  keyed.forEach((entry, i) => (node.children[i] = entry.child));
-  return keyed[0]!.first;
+/** Puts children in the order of their first word, deepest phrases first. */
+function sortByFirstWord(root: ConversionNode): void {
+  const first = new Map<ConversionNode, number>();
+  for (const node of postOrder<ConversionNode>([root], (n) => (n.kind === 'phrase' ? n.children : undefined))) {
+    if (node.kind === 'word') {
+      first.set(node, node.index);
+      continue;
+    }
+    const keyed = node.children.map((child) => ({ child, first: first.get(child)! }));
+    keyed.sort((a, b) => a.first - b.first);
+    keyed.forEach((entry, i) => (node.children[i] = entry.child));
+    first.set(node, keyed[0]!.first);
+  }
 }

@@ -1,5 +1,6 @@
 import type { ConstituentNode, EmptyElement, Phrase, Tree } from '../model/constituency.js';
 import { numberTerminals, renumberTerminals, sortTreeByFirstTerminal } from '../model/terminal-order.js';
+import { nodesBottomUp, nodesTopDown } from '../model/traverse.js';
 
 /** Empty elements whose antecedent is interpreted where they stand (bracketing conventions, Bies et al. 1995, from memory). */
 export const MOVING_TRACES: ReadonlySet<string> = new Set(['*T*', '*ICH*', '*EXP*', '*RNR*']);
@@ -38,16 +39,19 @@ export function resolveTraces(tree: Tree): Resolution {
   const copy = numberTerminals(tree);
   const antecedents = new Map<number, { node: Phrase; parent: Phrase | Tree }>();
   const traces: Array<{ trace: EmptyElement; parent: Phrase }> = [];
-  const visit = (node: ConstituentNode, parent: Phrase | Tree) => {
+  const withWords = phrasesWithWords(copy.children);
+  // Parents before children, left to right, as the trees are written.
+  const stack: Array<{ node: ConstituentNode; parent: Phrase | Tree }> = copy.children.map((node) => ({ node, parent: copy })).reverse();
+  while (stack.length > 0) {
+    const { node, parent } = stack.pop()!;
     if (node.type === 'phrase') {
       const coindex = node.label.coindex;
-      if (coindex !== undefined && parent.type === 'phrase' && hasWords(node) && !antecedents.has(coindex)) antecedents.set(coindex, { node, parent });
-      for (const child of node.children) visit(child, node);
+      if (coindex !== undefined && parent.type === 'phrase' && withWords.has(node) && !antecedents.has(coindex)) antecedents.set(coindex, { node, parent });
+      for (let i = node.children.length - 1; i >= 0; i--) stack.push({ node: node.children[i]!, parent: node });
     } else if (node.type === 'empty' && node.refIndex !== undefined && parent.type === 'phrase' && MOVING_TRACES.has(node.kind.toUpperCase())) {
       traces.push({ trace: node, parent });
     }
-  };
-  for (const child of copy.children) visit(child, copy);
+  }
   const moved = new Set<number>();
   for (const { trace, parent } of traces) {
     const refIndex = trace.refIndex!;
@@ -65,14 +69,10 @@ export function resolveTraces(tree: Tree): Resolution {
   if (moved.size === 0) return { tree: copy, moved: 0, leftover: 0 };
   // A moved antecedent keeps its coindex only while something else still points to it.
   const stillPointed = new Set<number>();
-  const collect = (node: ConstituentNode) => {
+  for (const node of nodesTopDown(copy.children)) {
     if (node.type === 'empty' && node.refIndex !== undefined) stillPointed.add(node.refIndex);
-    if (node.type === 'phrase') {
-      if (node.label.gapIndex !== undefined) stillPointed.add(node.label.gapIndex);
-      node.children.forEach(collect);
-    }
-  };
-  copy.children.forEach(collect);
+    if (node.type === 'phrase' && node.label.gapIndex !== undefined) stillPointed.add(node.label.gapIndex);
+  }
   for (const index of moved) {
     const antecedent = antecedents.get(index)!;
     if (stillPointed.has(index)) continue;
@@ -80,7 +80,7 @@ export function resolveTraces(tree: Tree): Resolution {
     const { coindex: _dropped, ...label } = antecedent.node.label;
     antecedent.node.label = label;
   }
-  for (const child of copy.children) dropChildless(child);
+  dropChildless(copy.children);
   copy.children = copy.children.filter((child) => child.type !== 'phrase' || child.children.length > 0);
   sortTreeByFirstTerminal(copy);
   copy.discontinuous = true;
@@ -90,22 +90,29 @@ export function resolveTraces(tree: Tree): Resolution {
 }
 
 function holdsMovingTrace(node: ConstituentNode): boolean {
-  if (node.type === 'empty') return node.refIndex !== undefined && MOVING_TRACES.has(node.kind.toUpperCase());
-  return node.type === 'phrase' && node.children.some(holdsMovingTrace);
+  for (const below of nodesTopDown([node])) {
+    if (below.type === 'empty' && below.refIndex !== undefined && MOVING_TRACES.has(below.kind.toUpperCase())) return true;
+  }
+  return false;
 }
 
-function hasWords(node: ConstituentNode): boolean {
-  return node.type === 'preterminal' || (node.type === 'phrase' && node.children.some(hasWords));
+/** The phrases that hold at least one word, found bottom-up. */
+function phrasesWithWords(nodes: ConstituentNode[]): Set<ConstituentNode> {
+  const found = new Set<ConstituentNode>();
+  for (const node of nodesBottomUp(nodes)) {
+    if (node.type === 'phrase' && node.children.some((child) => child.type === 'preterminal' || found.has(child))) found.add(node);
+  }
+  return found;
 }
 
 function contains(node: ConstituentNode, target: ConstituentNode): boolean {
   if (node === target) return true;
-  return node.type === 'phrase' && node.children.some((child) => contains(child, target));
+  return node.type === 'phrase' && nodesTopDown(node.children).includes(target);
 }
 
-/** Removes phrases a move left without children; returns whether the node keeps any. */
-function dropChildless(node: ConstituentNode): boolean {
-  if (node.type !== 'phrase') return true;
-  node.children = node.children.filter(dropChildless);
-  return node.children.length > 0;
+/** Removes, in place, phrases a move left without children, lowest first (this function's own copies). */
+function dropChildless(nodes: ConstituentNode[]): void {
+  for (const node of nodesBottomUp(nodes)) {
+    if (node.type === 'phrase') node.children = node.children.filter((child) => child.type !== 'phrase' || child.children.length > 0);
+  }
 }

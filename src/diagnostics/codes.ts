@@ -51,8 +51,10 @@ export const diagnosticCodes = {
   // Conversion.
   'nothing-to-convert': { severity: 'warning', meaning: 'a tree without words (only empty elements or notes) is skipped' },
   'secondary-edges-dropped': { severity: 'warning', meaning: 'secondary edges of a graph have no place in the output and are left out' },
-  'not-a-tree': { severity: 'error', meaning: 'a sentence whose heads do not form a tree cannot be bracketed' },
+  'not-a-tree': { severity: 'error', meaning: 'a sentence whose heads do not form a tree (a HEAD that is no word, no root or several, a cycle) cannot be measured, bracketed or round-tripped; it is left out' },
+  'carried-brackets-broken': { severity: 'error', meaning: 'the bracketing carried in lossless mode (MISC Brackets, # brackets) does not make a tree; the sentence is not rebuilt' },
   'misaligned': { severity: 'warning', meaning: 'a converted sentence and its gold sentence do not have the same words' },
+  'unpaired': { severity: 'warning', meaning: 'trees or gold sentences left over when the other side ran out' },
   // Head and label tables.
   'table-syntax': { severity: 'error', meaning: 'a line of a table that does not parse' },
   'table-invalid': { severity: 'error', meaning: 'a statement of a table that parses but makes no sense' },

@@ -54,3 +54,22 @@ export function diagnose(
   if (notes && notes.length > 0) diagnostic.notes = notes;
   return diagnostic;
 }
+
+/** Something read from a file that a diagnostic can point at as a whole: a tree, a sentence. */
+export interface Located {
+  file?: string;
+  position?: { start: number; end: number };
+  source?: LineIndex;
+}
+
+/**
+ * A diagnostic about a whole tree or sentence, at its start. An item that no
+ * file held (built by a pass) is named as line 1, column 1 of its file, so that
+ * it is still reported rather than lost.
+ */
+export function diagnoseItem(code: DiagnosticCode, message: string, item: Located, notes?: string[]): Diagnostic {
+  if (item.source && item.position) return diagnose(code, message, { file: item.file ?? '-', offset: item.position.start, lines: item.source }, notes);
+  const diagnostic: Diagnostic = { code, severity: diagnosticCodes[code].severity, message, file: item.file ?? '-', offset: 0, line: 1, column: 1 };
+  if (notes && notes.length > 0) diagnostic.notes = notes;
+  return diagnostic;
+}

@@ -2,7 +2,8 @@ import { convertTree, type ConversionSettings } from '../convert/convert-tree.js
 import type { ConstituentNode, Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
-import { decodeBrackets, decodeCarriedTrees } from '../reverse/decode-brackets.js';
+import { treeHeads } from '../analysis/heads.js';
+import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../reverse/decode-brackets.js';
 import { carryComment } from '../convert/carry-wordless-trees.js';
 import { writeTree } from '../formats/bracketed/write-bracketed.js';
 import type { HeadTable } from '../tables/table-model.js';
@@ -135,7 +136,12 @@ export class BracketRoundTrip {
       this.wordless++;
       return undefined;
     }
-    const carried = this.conversion.lossless ? decodeBrackets(dependencies.sentence) : undefined;
+    const decoded = this.conversion.lossless ? decodeBrackets(dependencies.sentence) : undefined;
+    if (isBrokenCarry(decoded)) {
+      this.note('other', id);
+      return undefined;
+    }
+    const carried = decoded;
     const rebuilt = carried ? { tree: carried } : buildBrackets(dependencies.sentence, this.bracketing);
     if (!rebuilt) {
       this.note('other', id);
@@ -271,7 +277,14 @@ export class DependencyRoundTrip {
     this.scorer = new AttachmentScorer(countPunctuation);
   }
 
-  add(sentence: DependencySentence, id: string): void {
+  /**
+   * Takes one sentence there and back. A sentence whose heads do not form a
+   * tree cannot make the trip: it is not counted, and the reason is returned
+   * for the caller to report.
+   */
+  add(sentence: DependencySentence, id: string): string | undefined {
+    const checked = treeHeads(sentence);
+    if ('problem' in checked) return checked.problem;
     this.sentences++;
     const rebuilt = buildBrackets(sentence, this.bracketing);
     const back = rebuilt && convertTree(rebuilt.tree, { ...this.conversion, traces: 'restore' }, id, id);

@@ -19,7 +19,7 @@ export interface AttachmentScore {
  * (`-LRB-`, `-RSB-` …, also inside words) are read as brackets; the kind of
  * bracket is not compared, as corpora write round ones for all kinds.
  */
-function sameForm(a: string, b: string): boolean {
+export function sameForm(a: string, b: string): boolean {
   const plain = (form: string) =>
     form.replace(/-L[RSC]B-/g, '(').replace(/-R[RSC]B-/g, ')').replace(/[[{]/g, '(').replace(/[\]}]/g, ')');
   return a === b || plain(a) === plain(b);
@@ -46,7 +46,11 @@ export class AttachmentScorer {
   /** Words with the right head and the wrong relation, by `gold → ours` (universal parts). */
   readonly confusions = new Map<string, number>();
 
-  constructor(private readonly withPunctuation = false) {}
+  constructor(
+    private readonly withPunctuation = false,
+    /** Gold words not to score (a gold file may mark words it could not align, say). */
+    private readonly unscored?: (word: DependencyWord) => boolean,
+  ) {}
 
   /** Scores one pair; returns false (and counts it) when the words do not line up. */
   add(predicted: DependencySentence, gold: DependencySentence): boolean {
@@ -59,6 +63,7 @@ export class AttachmentScorer {
     this.score.sentences++;
     g.forEach((goldWord, i) => {
       if (!this.withPunctuation && isPunctuation(goldWord)) return;
+      if (this.unscored?.(goldWord)) return;
       const word = p[i]!;
       this.score.words++;
       if (word.head !== goldWord.head) return;

@@ -1,10 +1,10 @@
 import type { Report } from '../diagnostics/diagnostic.js';
-import { reportWordlessTree } from '../convert/report-wordless-tree.js';
 import { convertTree, type ConversionSettings } from '../convert/convert-tree.js';
 import { headVector } from '../analysis/heads.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { AttachmentScorer, isPunctuation, universalPart } from './score-attachments.js';
+import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
 
 /** One word the conversion attached wrongly, for the error tables. */
 export interface AttachmentError {
@@ -47,7 +47,8 @@ export interface ConversionScore {
 /**
  * Converts trees and scores them word by word against gold sentences in the
  * same order (the shared GUM pair is parallel), together with the oracle that
- * picks, in every phrase, the child holding the gold head.
+ * picks, in every phrase, the child holding the gold head. Trees and gold are
+ * paired as pair-with-gold does; `tally` counts what was paired and what not.
  */
 export async function scoreConversion(
   trees: AsyncIterable<Tree>,
@@ -55,36 +56,22 @@ export async function scoreConversion(
   settings: ConversionSettings,
   report: Report,
   withPunctuation = false,
+  tally: PairingTally = emptyTally(),
+  unscored?: (word: DependencyWord) => boolean,
 ): Promise<ConversionScore> {
-  const scorer = new AttachmentScorer(withPunctuation);
-  const oracle = new AttachmentScorer(withPunctuation);
+  const scorer = new AttachmentScorer(withPunctuation, unscored);
+  const oracle = new AttachmentScorer(withPunctuation, unscored);
   const errors: AttachmentError[] = [];
   const parents = new Map<string, ParentTally>();
   let skipped = 0;
-  const goldIterator = gold[Symbol.asyncIterator]();
-  for await (const tree of trees) {
-    // A tree without words has no gold sentence: it is reported and takes none from the gold side.
-    const conversion = convertTree(tree, settings, tree.id ?? '', tree.id ?? '');
-    if (!conversion) {
-      reportWordlessTree(tree, report);
-      continue;
-    }
-    const next = await goldIterator.next();
-    if (next.done) break;
-    const goldSentence = next.value;
-    const id = tree.id ?? goldSentence.id ?? String(scorer.score.sentences + 1);
+  for await (const { tree, gold: goldSentence, id } of pairWithGold(trees, gold, settings.traces, report, tally)) {
+    const conversion = convertTree(tree, settings, id, id);
     const heads = headVector(goldSentence);
     if (!conversion || !heads) {
       skipped++;
       continue;
     }
-    if (!scorer.add(conversion.sentence, goldSentence)) {
-      skipped++;
-      const where = tree.source && tree.position ? tree.source.pointAt(tree.position.start) : { line: 1, column: 1 };
-      const message = `tree ${id} and gold sentence ${goldSentence.id ?? '?'} do not have the same words; left out`;
-      report({ code: 'misaligned', severity: 'warning', message, file: tree.file ?? '-', offset: tree.position?.start ?? 0, line: where.line, column: where.column });
-      continue;
-    }
+    scorer.add(conversion.sentence, goldSentence);
     const oracleConversion = convertTree(tree, { ...settings, oracle: heads }, id, id);
     if (oracleConversion) oracle.add(oracleConversion.sentence, goldSentence);
     const goldWords = goldSentence.lines.filter((l): l is DependencyWord => l.type === 'word');
@@ -92,6 +79,7 @@ export async function scoreConversion(
     conversion.sentence.lines.forEach((line, i) => {
       const goldWord = goldWords[i]!;
       if (!withPunctuation && isPunctuation(goldWord)) return;
+      if (unscored?.(goldWord)) return;
       const word = conversion.words[i]!;
       const parent = parentOf[word.index];
       const category = parent?.category || 'ROOT';
@@ -120,20 +108,17 @@ export async function scoreConversion(
 }
 
 import type { ConversionNode, PhraseNode } from '../convert/conversion-tree.js';
-import { headWordOf } from '../convert/conversion-tree.js';
+import { headWordOf, phrasesTopDown } from '../convert/conversion-tree.js';
 
 /** For every word, the phrase in which it attaches: the lowest phrase of which it is not the head word. */
 function parentsByWord(root: ConversionNode, count: number): Array<PhraseNode | undefined> {
   const parents: Array<PhraseNode | undefined> = new Array(count + 1);
-  const visit = (node: ConversionNode) => {
-    if (node.kind !== 'phrase') return;
+  for (const node of phrasesTopDown(root)) {
     const own = headWordOf(node).index;
     for (const child of node.children) {
       const word = headWordOf(child).index;
       if (word !== own) parents[word] = node;
-      visit(child);
     }
-  };
-  visit(root);
+  }
   return parents;
 }

@@ -1,8 +1,8 @@
-import { reportWordlessTree } from '../convert/report-wordless-tree.js';
 import type { Report } from '../diagnostics/diagnostic.js';
 import type { ConversionSettings } from '../convert/convert-tree.js';
 import { findHeads, candidateOf, chooseFrom } from '../convert/find-heads.js';
-import type { ConversionNode } from '../convert/conversion-tree.js';
+import { phrasesBottomUp } from '../convert/conversion-tree.js';
+import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
 import { oracleChooser } from '../convert/oracle-heads.js';
 import { prepareTree } from '../convert/prepare-tree.js';
 import { headVector } from '../analysis/heads.js';
@@ -45,41 +45,27 @@ export async function collectPhrases(
   gold: AsyncIterable<DependencySentence>,
   settings: ConversionSettings,
   report: Report = () => undefined,
+  tally: PairingTally = emptyTally(),
 ): Promise<{ samples: Map<string, Sample[]>; sentences: number; misaligned: number }> {
   const samples = new Map<string, Sample[]>();
   let sentences = 0;
-  let misaligned = 0;
-  const goldIterator = gold[Symbol.asyncIterator]();
-  for await (const tree of trees) {
-    // A tree without words has no gold sentence: it is reported and takes none from the gold side.
-    const prepared = prepareTree(tree, settings.traces);
-    if (!prepared) {
-      reportWordlessTree(tree, report);
-      continue;
-    }
-    const next = await goldIterator.next();
-    if (next.done) break;
-    const heads = headVector(next.value);
-    if (!heads || prepared.words.length !== heads.length - 1) {
-      misaligned++;
-      continue;
-    }
+  for await (const pair of pairWithGold(trees, gold, settings.traces, report, tally)) {
+    const prepared = prepareTree(pair.tree, settings.traces);
+    const heads = headVector(pair.gold);
+    if (!prepared || !heads) continue;
     sentences++;
     const oracle = oracleChooser(heads);
     findHeads(prepared.root, settings.heads, settings.coordination, oracle);
-    const visit = (node: ConversionNode) => {
-      if (node.kind !== 'phrase') return;
-      node.children.forEach(visit);
-      if (node.coordination || !node.head || node.head.reason.startsWith('coordination')) return;
+    for (const node of phrasesBottomUp(prepared.root)) {
+      if (node.coordination || !node.head || node.head.reason.startsWith('coordination')) continue;
       const goldChild = oracle(node);
-      if (goldChild === undefined || goldChild < 0) return;
+      if (goldChild === undefined || goldChild < 0) continue;
       const list = samples.get(node.category) ?? [];
       list.push({ candidates: node.children.map(candidateOf), gold: goldChild });
       samples.set(node.category, list);
-    };
-    visit(prepared.root);
+    }
   }
-  return { samples, sentences, misaligned };
+  return { samples, sentences, misaligned: tally.misaligned };
 }
 
 /** The index a learned block chooses among candidates. */
@@ -187,8 +173,15 @@ export function suggestBlocks(samples: Map<string, Sample[]>, table: HeadTable, 
   return { changed, kept };
 }
 
-/** Writes the suggestion as a table that builds on the base and replaces the changed blocks. */
-export function writeSuggestedTable(name: string, base: string, sentences: number, changed: LearnedBlock[], kept: LearnedBlock[]): string {
+/**
+ * Writes the suggestion as a table that builds on the base and replaces the
+ * changed blocks. `base` is how the new table names its base (a shipped name,
+ * or a path from the new table's folder). When the new table replaces its own
+ * base file, it cannot build on itself: `inlineBase` then holds the base's text,
+ * which the new table repeats (its own `table` line left out) before the
+ * changed blocks, which replace the base's blocks of the same categories.
+ */
+export function writeSuggestedTable(name: string, base: string, sentences: number, changed: LearnedBlock[], kept: LearnedBlock[], inlineBase?: string): string {
   const share = (n: number, of: number) => `${n.toLocaleString('en-US')} (${((100 * n) / of).toFixed(1)}%)`;
   const lines = [
     `# ${name}: suggested by treebridge heads suggest from ${sentences.toLocaleString('en-US')} sentences with gold`,
@@ -201,7 +194,12 @@ export function writeSuggestedTable(name: string, base: string, sentences: numbe
     lines.push('#', `# Kept from ${base} (too few phrases, or no clear gain):`);
     for (const block of kept.slice(0, 40)) lines.push(`#   ${block.category}: ${block.phrases} phrases, base right in ${share(block.baseRight, block.phrases)}`);
   }
-  lines.push('', `table ${name}`, `builds-on ${base}`, '');
+  if (inlineBase === undefined) lines.push('', `table ${name}`, `builds-on ${base}`, '');
+  else {
+    lines.push('', `table ${name}`, '', `# The base table, as it was (this file replaces it):`);
+    for (const line of inlineBase.split('\n')) if (!/^\s*table\s/.test(line)) lines.push(line);
+    lines.push('', '# The learned blocks, replacing those above for their categories:', '');
+  }
   for (const block of changed) {
     lines.push(`# ${block.category}: ${block.phrases.toLocaleString('en-US')} phrases; ${base} right in ${share(block.baseRight, block.phrases)}, this block in ${share(block.learnedRight, block.phrases)}.`);
     lines.push(`head ${block.category}`);

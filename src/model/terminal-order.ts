@@ -1,4 +1,5 @@
 import type { ConstituentNode, EmptyElement, MetaNode, Preterminal, Tree } from './constituency.js';
+import { nodesBottomUp, nodesTopDown, postOrder, rebuildBottomUp } from './traverse.js';
 
 /** A node that takes a place in the sentence: a word, an empty element, or a note. */
 export type Terminal = Preterminal | EmptyElement | MetaNode;
@@ -6,11 +7,7 @@ export type Terminal = Preterminal | EmptyElement | MetaNode;
 /** The terminals of a tree in tree order (left to right through the brackets); notes are not entered. */
 export function terminalsOf(tree: Tree): Terminal[] {
   const found: Terminal[] = [];
-  const visit = (node: ConstituentNode) => {
-    if (node.type === 'phrase') node.children.forEach(visit);
-    else found.push(node);
-  };
-  tree.children.forEach(visit);
+  for (const node of nodesTopDown(tree.children)) if (node.type !== 'phrase') found.push(node);
   return found;
 }
 
@@ -33,32 +30,35 @@ export function terminalsInOrder(tree: Tree): Terminal[] {
  * copied; words too, labels are shared.
  */
 export function numberTerminals(tree: Tree): Tree {
-  const copy: Tree = { ...tree, children: tree.children.map(copyNode) };
-  if (tree.secondaryEdges) {
-    // Secondary edges point at the copies.
-    const copies = new Map<ConstituentNode, ConstituentNode>();
-    const pair = (a: ConstituentNode, b: ConstituentNode) => {
-      copies.set(a, b);
-      if (a.type === 'phrase' && b.type === 'phrase') a.children.forEach((child, i) => pair(child, b.children[i]!));
-    };
-    tree.children.forEach((child, i) => pair(child, copy.children[i]!));
+  // Secondary edges point at the copies.
+  const copies = tree.secondaryEdges ? new Map<ConstituentNode, ConstituentNode>() : undefined;
+  const children = rebuildBottomUp<ConstituentNode, ConstituentNode>(
+    tree.children,
+    (node) => (node.type === 'phrase' || node.type === 'meta' ? node.children : undefined),
+    (node, copiedChildren) => {
+      let copied: ConstituentNode;
+      switch (node.type) {
+        case 'phrase':
+        case 'meta':
+          copied = { ...node, children: copiedChildren };
+          break;
+        case 'preterminal':
+          copied = { ...node, word: { ...node.word } };
+          break;
+        case 'empty':
+          copied = { ...node };
+          break;
+      }
+      copies?.set(node, copied);
+      return copied;
+    },
+  );
+  const copy: Tree = { ...tree, children };
+  if (tree.secondaryEdges && copies) {
     copy.secondaryEdges = tree.secondaryEdges.map((edge) => ({ ...edge, from: copies.get(edge.from) ?? edge.from, to: copies.get(edge.to) ?? edge.to }));
   }
   renumberTerminals(copy);
   return copy;
-}
-
-function copyNode(node: ConstituentNode): ConstituentNode {
-  switch (node.type) {
-    case 'phrase':
-      return { ...node, children: node.children.map(copyNode) };
-    case 'preterminal':
-      return { ...node, word: { ...node.word } };
-    case 'empty':
-      return { ...node };
-    case 'meta':
-      return { ...node, children: node.children.map(copyNode) };
-  }
 }
 
 /** Gives the terminals of a tree (in place: call it on a copy) the orders 1, 2, 3 … in sentence order. */
@@ -75,7 +75,10 @@ export function firstOrder(node: ConstituentNode): number {
   if (node.type === 'preterminal') return node.word.order ?? Infinity;
   if (node.type === 'empty' || (node.type === 'meta' && node.order !== undefined)) return node.order ?? Infinity;
   let first = Infinity;
-  for (const child of node.children) first = Math.min(first, firstOrder(child));
+  for (const below of nodesTopDown(node.children)) {
+    if (below.type === 'preterminal') first = Math.min(first, below.word.order ?? Infinity);
+    else if (below.type === 'empty' || below.type === 'meta') first = Math.min(first, below.order ?? Infinity);
+  }
   return first;
 }
 
@@ -89,28 +92,53 @@ export function sortByFirstTerminal(nodes: ConstituentNode[]): void {
 
 /** Sorts the children of every phrase of a tree, in place, by their first terminal. */
 export function sortTreeByFirstTerminal(tree: Tree): void {
-  const visit = (node: ConstituentNode): number => {
-    if (node.type !== 'phrase') return firstOrder(node);
-    const keyed = node.children.map((child) => ({ node: child, first: visit(child) }));
-    keyed.sort((a, b) => a.first - b.first);
-    keyed.forEach((entry, i) => (node.children[i] = entry.node));
-    return keyed.length > 0 ? keyed[0]!.first : Infinity;
-  };
-  const keyed = tree.children.map((child) => ({ node: child, first: visit(child) }));
+  // Bottom-up, each phrase's first terminal is the first of its first child once its children are sorted.
+  const first = new Map<ConstituentNode, number>();
+  const firstOf = (node: ConstituentNode) => first.get(node) ?? terminalFirst(node);
+  for (const node of nodesBottomUp(tree.children)) {
+    if (node.type !== 'phrase') continue;
+    sortKeyed(node.children, firstOf);
+    first.set(node, node.children.length > 0 ? firstOf(node.children[0]!) : Infinity);
+  }
+  sortKeyed(tree.children, firstOf);
+}
+
+/** The order of a terminal; a note that holds brackets has none of its own. */
+function terminalFirst(node: ConstituentNode): number {
+  if (node.type === 'preterminal') return node.word.order ?? Infinity;
+  if (node.type === 'empty' || node.type === 'meta') return node.order ?? Infinity;
+  return Infinity;
+}
+
+function sortKeyed(nodes: ConstituentNode[], key: (node: ConstituentNode) => number): void {
+  if (nodes.length < 2) return;
+  const keyed = nodes.map((node) => ({ node, first: key(node) }));
   keyed.sort((a, b) => a.first - b.first);
-  keyed.forEach((entry, i) => (tree.children[i] = entry.node));
+  keyed.forEach((entry, i) => (nodes[i] = entry.node));
 }
 
 /** How many phrases of a tree have gaps: their terminals are not one unbroken stretch of the sentence. */
 export function countDiscontinuousPhrases(tree: Tree): number {
   if (!tree.discontinuous) return 0;
   let count = 0;
-  const visit = (node: ConstituentNode): number[] => {
-    if (node.type !== 'phrase') return [firstOrder(node)];
-    const orders = node.children.flatMap(visit);
-    if (Math.max(...orders) - Math.min(...orders) + 1 !== orders.length) count++;
-    return orders;
-  };
-  tree.children.forEach(visit);
+  // Bottom-up: the smallest and largest order under each phrase, and how many terminals it holds.
+  const spans = new Map<ConstituentNode, { low: number; high: number; size: number }>();
+  for (const node of postOrder<ConstituentNode>(tree.children, (n) => (n.type === 'phrase' ? n.children : undefined))) {
+    if (node.type !== 'phrase') {
+      const order = terminalFirst(node);
+      spans.set(node, { low: order, high: order, size: 1 });
+      continue;
+    }
+    const span = { low: Infinity, high: -Infinity, size: 0 };
+    for (const child of node.children) {
+      const below = spans.get(child)!;
+      span.low = Math.min(span.low, below.low);
+      span.high = Math.max(span.high, below.high);
+      span.size += below.size;
+      spans.delete(child);
+    }
+    if (span.high - span.low + 1 !== span.size) count++;
+    spans.set(node, span);
+  }
   return count;
 }

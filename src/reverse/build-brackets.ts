@@ -1,4 +1,4 @@
-import { wordsOf } from '../analysis/heads.js';
+import { treeHeads, wordsOf } from '../analysis/heads.js';
 import type { ConstituentNode, EmptyElement, Phrase, Preterminal, Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { parseLabel } from '../model/label.js';
@@ -46,8 +46,9 @@ export interface Bracketing {
 export function buildBrackets(sentence: DependencySentence, settings: BracketSettings): Bracketing | undefined {
   const words = wordsOf(sentence);
   const n = words.length;
-  const original = [0, ...words.map((w) => Number(w.head))];
-  if (original.some((h) => !Number.isInteger(h) || h < 0 || h > n) || original.filter((h, i) => i > 0 && h === 0).length !== 1) return undefined;
+  const checked = treeHeads(sentence);
+  if ('problem' in checked) return undefined;
+  const original = checked.heads;
   const { heads, lifts } = settings.discontinuous ? { heads: original, lifts: [] } : liftNonProjectiveArcs(original);
   // A lifted dependent's coindex, and the trace inside the phrase of its real head.
   const coindex = new Map<number, number>();
@@ -96,10 +97,13 @@ export function buildBrackets(sentence: DependencySentence, settings: BracketSet
     return parseLabel(parts.join('-'));
   };
 
+  // Phrases are built bottom-up, dependents before their heads, with an explicit stack: a chain of
+  // dependents thousands deep must not exhaust the call stack.
+  const built: Array<ConstituentNode | undefined> = new Array(n + 1);
   const build = (w: number): ConstituentNode => {
     // The word's own bracket, its dependents and the traces of dependents lifted away from it, by position.
     const items: Array<{ at: number; node: ConstituentNode }> = [{ at: w, node: preterminal(w) }];
-    for (const d of dependents[w]!) items.push({ at: d, node: build(d) });
+    for (const d of dependents[w]!) items.push({ at: d, node: built[d]! });
     for (const t of traces.get(w) ?? []) items.push({ at: t.at, node: trace(t.index) });
     items.sort((a, b) => a.at - b.at);
     if (settings.shape === 'flat' || items.length === 1) {
@@ -119,8 +123,18 @@ export function buildBrackets(sentence: DependencySentence, settings: BracketSet
     });
     return current.node;
   };
+  const pending: Array<{ word: number; expanded: boolean }> = [{ word: root, expanded: false }];
+  while (pending.length > 0) {
+    const entry = pending.pop()!;
+    if (entry.expanded) {
+      built[entry.word] = build(entry.word);
+      continue;
+    }
+    pending.push({ word: entry.word, expanded: true });
+    for (const d of dependents[entry.word]!) pending.push({ word: d, expanded: false });
+  }
 
-  const top = build(root);
+  const top = built[root]!;
   const tree: Tree = { type: 'tree', wrapper: { label: '' }, children: [top], id: sentence.id, idPosition: undefined, position: undefined, file: sentence.file, source: undefined };
   if (settings.discontinuous) {
     tree.discontinuous = true;

@@ -1,6 +1,7 @@
 import type { ConstituentNode, EmptyElement, Phrase, Tree } from '../model/constituency.js';
 import { parseLabel } from '../model/label.js';
 import { numberTerminals, orderOf, renumberTerminals, sortTreeByFirstTerminal, terminalsOf } from '../model/terminal-order.js';
+import { nodesBottomUp, nodesTopDown, rebuildBottomUp } from '../model/traverse.js';
 
 /** What insert-traces did to one tree. */
 export interface TraceInsertion {
@@ -34,12 +35,16 @@ export function insertTraces(tree: Tree): TraceInsertion {
   const moved = new Set<ConstituentNode>();
   let traces = 0;
 
-  /** Makes the phrases under `node` continuous, lowest first, moving children out into `parentChildren`. */
-  const mend = (node: ConstituentNode, parentChildren: ConstituentNode[]) => {
-    if (node.type !== 'phrase') return;
-    for (const child of [...node.children]) mend(child, node.children);
+  // Phrases are mended lowest first; a child that leaves a phrase goes to that phrase's parent, which
+  // is mended later and may send it further up. Parents are taken before anything moves.
+  const parentOf = new Map<ConstituentNode, ConstituentNode[]>();
+  for (const child of copy.children) parentOf.set(child, copy.children);
+  const phrases = nodesBottomUp(copy.children).filter((node): node is Phrase => node.type === 'phrase');
+  for (const node of phrases) for (const child of node.children) parentOf.set(child, node.children);
+  for (const node of phrases) {
+    const parentChildren = parentOf.get(node)!;
     const runs = runsOf(node.children);
-    if (runs.length < 2) return;
+    if (runs.length < 2) continue;
     const kept = runs.reduce((best, run) => (keepScore(run) > keepScore(best) ? run : best));
     const first = kept.from;
     const last = kept.to;
@@ -63,12 +68,14 @@ export function insertTraces(tree: Tree): TraceInsertion {
       }
       moved.add(outgoing);
       parentChildren.push(outgoing);
+      parentOf.set(outgoing, parentChildren);
     }
+    // The kept children now stand in the phrase's new list of children.
+    for (const child of node.children) parentOf.set(child, node.children);
     renumberTerminals(copy);
     sortTreeByFirstTerminal(copy);
-  };
-  for (const child of [...copy.children]) mend(child, copy.children);
-  const mended: Tree = { ...copy, children: copy.children.map(withoutOrder) };
+  }
+  const mended: Tree = { ...copy, children: withoutOrder(copy.children) };
   delete mended.discontinuous;
   return { tree: mended, traces };
 }
@@ -122,28 +129,32 @@ function traceTo(index: number, order: number): EmptyElement {
 /** The largest coindex, gapping index or trace index in the tree, so that new ones do not clash. */
 function largestIndex(tree: Tree): number {
   let largest = 0;
-  const visit = (node: ConstituentNode) => {
-    if (node.type === 'phrase') {
-      largest = Math.max(largest, node.label.coindex ?? 0, node.label.gapIndex ?? 0);
-      node.children.forEach(visit);
-    } else if (node.type === 'empty') largest = Math.max(largest, node.refIndex ?? 0, node.label.coindex ?? 0);
-  };
-  tree.children.forEach(visit);
+  for (const node of nodesTopDown(tree.children)) {
+    if (node.type === 'phrase') largest = Math.max(largest, node.label.coindex ?? 0, node.label.gapIndex ?? 0);
+    else if (node.type === 'empty') largest = Math.max(largest, node.refIndex ?? 0, node.label.coindex ?? 0);
+  }
   return largest;
 }
 
-function withoutOrder(node: ConstituentNode): ConstituentNode {
-  switch (node.type) {
-    case 'phrase':
-      return { ...node, children: node.children.map(withoutOrder) };
-    case 'preterminal': {
-      const { order: _order, ...word } = node.word;
-      return { ...node, word };
-    }
-    case 'empty':
-    case 'meta': {
-      const { order: _order, ...rest } = node;
-      return rest as ConstituentNode;
-    }
-  }
+/** Copies of the nodes without `order` on their terminals. */
+function withoutOrder(nodes: ConstituentNode[]): ConstituentNode[] {
+  return rebuildBottomUp<ConstituentNode, ConstituentNode>(
+    nodes,
+    (node) => (node.type === 'phrase' ? node.children : undefined),
+    (node, children) => {
+      switch (node.type) {
+        case 'phrase':
+          return { ...node, children };
+        case 'preterminal': {
+          const { order: _order, ...word } = node.word;
+          return { ...node, word };
+        }
+        case 'empty':
+        case 'meta': {
+          const { order: _order, ...rest } = node;
+          return rest as ConstituentNode;
+        }
+      }
+    },
+  );
 }

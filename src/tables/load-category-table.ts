@@ -1,9 +1,8 @@
-import { readFileSync } from 'node:fs';
 import { z } from 'zod';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
 import { valueTest } from './label-pattern.js';
-import { resolveTable, TableError } from './load-table.js';
+import { readTableText, requireTable, TableError } from './table-source.js';
 import type { StatementSyntax } from './table-syntax.js';
 
 /** What a category rule looks at: a word that heads a phrase. */
@@ -38,20 +37,19 @@ const keys = ['upos', 'xpos', 'relation', 'has'] as const;
  * `category S upos=VERB,AUX has=nsubj,csubj`, `otherwise X`.
  */
 export function loadCategoryTable(nameOrPath: string): CategoryTable {
-  const path = resolveTable(nameOrPath, 'categories' as 'heads');
+  const path = requireTable(nameOrPath, 'categories');
   const fail = (line: number, column: number, message: string, code: Diagnostic['code'] = 'table-invalid'): Diagnostic => ({
     code,
     severity: 'error',
     message,
-    file: path ?? nameOrPath,
+    file: path,
     offset: 0,
     line,
     column,
   });
-  if (!path) throw new TableError([fail(1, 1, `no category table "${nameOrPath}"`, 'table-not-found')]);
   let statements: StatementSyntax[];
   try {
-    statements = parse(readFileSync(path, 'utf8'));
+    statements = parse(readTableText(path, 'categories'));
   } catch (error) {
     if (!(error instanceof GrammarError)) throw error;
     throw new TableError([fail(error.location.start.line, error.location.start.column, 'this line is not a statement', 'table-syntax')]);

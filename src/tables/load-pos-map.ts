@@ -1,7 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { diagnose } from '../diagnostics/diagnostic.js';
 import { LineIndex } from '../model/line-index.js';
-import { resolveTable, TableError } from './load-table.js';
+import { readTableText, requireTable, TableError } from './table-source.js';
 
 /**
  * Tag → UPOS. A tag written with a final `*` stands for every tag that starts
@@ -29,11 +28,8 @@ export class PosMap {
  * Universal POS tag per line, `#` lines are comments.
  */
 export function loadPosMap(nameOrPath: string): PosMap {
-  const path = resolveTable(nameOrPath, 'pos' as 'heads');
-  if (!path) {
-    throw new TableError([{ code: 'table-not-found', severity: 'error', message: `no POS map "${nameOrPath}"`, file: nameOrPath, offset: 0, line: 1, column: 1 }]);
-  }
-  const text = readFileSync(path, 'utf8');
+  const path = requireTable(nameOrPath, 'pos');
+  const text = readTableText(path, 'pos');
   const map = new PosMap();
   const lines = new LineIndex(text, { offset: 0, line: 1, column: 1 });
   let offset = 0;

@@ -1,59 +1,48 @@
-import { existsSync, readFileSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import { z } from 'zod';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
-import { diagnose } from '../diagnostics/diagnostic.js';
 import type { DiagnosticCode } from '../diagnostics/codes.js';
+import { diagnosticCodes } from '../diagnostics/codes.js';
+import { z } from 'zod';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
-import { LineIndex } from '../model/line-index.js';
 import { compilePattern, valueTest, type Candidate, type Matcher } from './label-pattern.js';
 import type { HeadBlock, HeadStep, HeadTable, LabelCondition, LabelRule, LabelTable } from './table-model.js';
 import type { StatementSyntax, WordSyntax } from './table-syntax.js';
+import { findTable, readTableText, requireTable, TableError, type TableKind } from './table-source.js';
 
-/** The shipped tables: headrules/ at the package root (two levels up from src/tables and from dist/src/tables). */
-export function headrulesFolder(): string {
-  const here = dirname(fileURLToPath(import.meta.url));
-  for (const up of ['../..', '../../..']) {
-    const folder = resolve(here, up, 'headrules');
-    if (existsSync(folder)) return folder;
-  }
-  return resolve(here, '../../headrules');
-}
-
-/** A table that cannot be loaded, with every problem found in it. */
-export class TableError extends Error {
-  constructor(readonly diagnostics: Diagnostic[]) {
-    super(diagnostics.map((d) => `${d.file}:${d.line}:${d.column}: ${d.message}`).join('\n'));
-  }
-}
+export { headrulesFolder, TableError } from './table-source.js';
 
 /** Finds a table by path, or by name among the shipped tables. */
-export function resolveTable(nameOrPath: string, kind: 'heads' | 'labels', from?: string): string | undefined {
-  const candidates = [
-    ...(from ? [resolve(dirname(from), nameOrPath), resolve(dirname(from), `${nameOrPath}.${kind}`)] : []),
-    resolve(nameOrPath),
-    join(headrulesFolder(), `${nameOrPath}.${kind}`),
-  ];
-  return candidates.find((path) => existsSync(path) && !path.endsWith('/'));
+export function resolveTable(nameOrPath: string, kind: TableKind, from?: string): string | undefined {
+  return findTable(nameOrPath, kind, from);
 }
 
+/** Loads a head table by shipped name or path, with the tables it builds on. */
 export function loadHeadTable(nameOrPath: string): HeadTable {
-  return new TableLoader().head(nameOrPath);
+  return new TableLoader().head(requireTable(nameOrPath, 'heads'));
 }
 
+/** Loads a label table by shipped name or path, with the tables it builds on. */
 export function loadLabelTable(nameOrPath: string): LabelTable {
-  return new TableLoader().labels(nameOrPath);
+  return new TableLoader().labels(requireTable(nameOrPath, 'labels'));
 }
 
-/** Compiles head-table text, for tests and tables made on the fly; `builds-on` names shipped tables. */
+/**
+ * Compiles head-table text, for tests and tables made in code; `builds-on`
+ * names shipped tables or paths relative to `file`.
+ */
 export function compileHeadTable(text: string, file = 'table.heads'): HeadTable {
   return new TableLoader().head(file, text);
 }
 
+/** Compiles label-table text; see {@link compileHeadTable}. */
 export function compileLabelTable(text: string, file = 'table.labels'): LabelTable {
   return new TableLoader().labels(file, text);
 }
+
+/** Longest chain of tables building on each other. */
+export const MAX_TABLE_CHAIN = 64;
+
+/** Problems kept per table load; the rest are counted in one last diagnostic. */
+const MAX_PROBLEMS = 200;
 
 // What each statement must look like; checked with zod, problems mapped back to their line and column.
 const word = z.object({ text: z.string(), line: z.number(), column: z.number() });
@@ -73,17 +62,63 @@ const statementShapes = z.discriminatedUnion('keyword', [
 const relation = /^[a-z]+(:[a-z]+)?$/;
 const conditionKeys = ['dependent', 'head', 'parent', 'pos', 'form', 'lemma', 'side', 'role'] as const;
 
-class TableLoader {
-  private readonly loading = new Set<string>();
-  private problems: Diagnostic[] = [];
-  private file = '';
-  private lines: LineIndex | undefined;
+/** One table file of a chain: its statements, and where problems in it are placed. */
+interface Link {
+  file: string;
+  /** The file's lines, split once, for excerpts. */
+  lines: string[];
+  statements: StatementSyntax[];
+}
 
-  head(nameOrPath: string, text?: string): HeadTable {
-    const statements = this.read(nameOrPath, 'heads', text);
+class TableLoader {
+  private problems: Diagnostic[] = [];
+  private dropped = 0;
+  /** The file whose statements are being compiled. */
+  private link: Link = { file: '', lines: [], statements: [] };
+
+  /**
+   * The table and every table under it, base first. `builds-on` chains are
+   * followed without recursion; a loop, a chain longer than
+   * {@link MAX_TABLE_CHAIN} or a second `builds-on` in one table is reported at
+   * its line.
+   */
+  private chain(path: string, kind: TableKind, text?: string): Link[] {
+    const links: Link[] = [];
+    const seen: string[] = [];
+    let current: { path: string; text?: string } | undefined = { path, text };
+    while (current) {
+      const link = this.read(current.path, kind, current.text);
+      links.push(link);
+      seen.push(current.path);
+      current = undefined;
+      const builds = link.statements.filter((statement) => statement.keyword === 'builds-on');
+      for (const extra of builds.slice(1)) this.problem('table-invalid', extra, 'a table builds on one table only');
+      const target = builds[0]?.words[0];
+      if (!target) break;
+      const base = findTable(target.text, kind, link.file);
+      if (!base) {
+        this.problem('table-not-found', target, `cannot build on "${target.text}": no such file, and no shipped table by that name`);
+        break;
+      }
+      if (seen.includes(base)) {
+        const circle = [...seen.slice(seen.indexOf(base)), base].join(' → ');
+        this.problem('table-invalid', target, `the tables build on each other in a circle: ${circle}`);
+        break;
+      }
+      if (links.length >= MAX_TABLE_CHAIN) {
+        this.problem('table-invalid', target, `more than ${MAX_TABLE_CHAIN} tables build on each other here; a chain that long is a mistake`);
+        break;
+      }
+      current = { path: base };
+    }
+    return links.reverse();
+  }
+
+  head(path: string, text?: string): HeadTable {
+    const links = this.chain(path, 'heads', text);
     let table: HeadTable = {
       kind: 'heads',
-      name: nameOrPath,
+      name: path,
       blocks: new Map(),
       fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], guards: [], vetoes: [], written: [], file: 'built in', line: 0 }] },
       punctuation: () => false,
@@ -91,21 +126,27 @@ class TableLoader {
       coordinationRule: undefined,
       raising: undefined,
     };
+    for (const link of links) {
+      this.link = link;
+      table = this.headLink(link, { ...table, name: link.file, blocks: new Map(table.blocks) });
+    }
+    this.finish();
+    return table;
+  }
+
+  /** Compiles one table's statements over the table it builds on. */
+  private headLink(link: Link, table: HeadTable): HeadTable {
     let block: HeadBlock | undefined;
-    const file = this.file;
     // Blocks with no step line at all, by where their head statement stands.
     const stepless = new Map<HeadBlock, StatementSyntax>();
-    for (const statement of statements) {
+    for (const statement of link.statements) {
       const words = statement.words;
       switch (statement.keyword) {
         case 'table':
           table.name = words[0]!.text;
           break;
-        case 'builds-on': {
-          const base = this.nested(() => new TableLoader().headFrom(words[0]!.text, file), words[0]!);
-          if (base) table = { ...base, name: table.name, blocks: new Map(base.blocks) };
+        case 'builds-on':
           break;
-        }
         case 'punctuation':
           table.punctuation = this.anyOf(words);
           break;
@@ -154,81 +195,61 @@ class TableLoader {
       }
     }
     for (const [b, statement] of stepless) this.problem('table-invalid', statement, `the block for ${b.categories.join(' ')} has no step`);
+    return table;
+  }
+
+  labels(path: string, text?: string): LabelTable {
+    const links = this.chain(path, 'labels', text);
+    let table: LabelTable = { kind: 'labels', name: path, rules: [], otherwise: 'dep' };
+    for (const link of links) {
+      this.link = link;
+      const own: LabelRule[] = [];
+      table = { ...table, name: link.file };
+      for (const statement of link.statements) {
+        const words = statement.words;
+        switch (statement.keyword) {
+          case 'table':
+            table.name = words[0]!.text;
+            break;
+          case 'builds-on':
+            break;
+          case 'label': {
+            const rule = this.rule(statement);
+            if (rule) own.push(rule);
+            break;
+          }
+          case 'otherwise':
+            if (!relation.test(words[0]!.text)) this.problem('table-invalid', words[0]!, `"${words[0]!.text}" is not a relation`);
+            table.otherwise = words[0]!.text;
+            break;
+          default:
+            this.problem('table-invalid', statement, `"${statement.keyword}" does not belong in a label table`);
+        }
+      }
+      // A table's own rules come before those it builds on, so that it can refine them.
+      table.rules = [...own, ...table.rules];
+    }
     this.finish();
     return table;
   }
 
-  private headFrom(nameOrPath: string, from: string): HeadTable {
-    const path = resolveTable(nameOrPath, 'heads', from);
-    return this.head(path ?? nameOrPath);
-  }
-
-  labels(nameOrPath: string, text?: string): LabelTable {
-    const statements = this.read(nameOrPath, 'labels', text);
-    let table: LabelTable = { kind: 'labels', name: nameOrPath, rules: [], otherwise: 'dep' };
-    const own: LabelRule[] = [];
-    const file = this.file;
-    for (const statement of statements) {
-      const words = statement.words;
-      switch (statement.keyword) {
-        case 'table':
-          table.name = words[0]!.text;
-          break;
-        case 'builds-on': {
-          const base = this.nested(() => new TableLoader().labels(resolveTable(words[0]!.text, 'labels', file) ?? words[0]!.text), words[0]!);
-          if (base) table = { ...base, name: table.name };
-          break;
-        }
-        case 'label': {
-          const rule = this.rule(statement);
-          if (rule) own.push(rule);
-          break;
-        }
-        case 'otherwise':
-          if (!relation.test(words[0]!.text)) this.problem('table-invalid', words[0]!, `"${words[0]!.text}" is not a relation`);
-          table.otherwise = words[0]!.text;
-          break;
-        default:
-          this.problem('table-invalid', statement, `"${statement.keyword}" does not belong in a label table`);
-      }
-    }
-    // A table's own rules come before those it builds on, so that it can refine them.
-    table.rules = [...own, ...table.rules];
-    this.finish();
-    return table;
-  }
-
-  private read(nameOrPath: string, kind: 'heads' | 'labels', text?: string): StatementSyntax[] {
-    let path = nameOrPath;
-    if (text === undefined) {
-      const found = resolveTable(nameOrPath, kind);
-      if (!found) {
-        const shipped = ['heads', 'labels'].includes(kind) ? `shipped tables are in ${headrulesFolder()}` : '';
-        throw new TableError([
-          { code: 'table-not-found', severity: 'error', message: `no ${kind} table "${nameOrPath}" (${shipped})`, file: nameOrPath, offset: 0, line: 1, column: 1 },
-        ]);
-      }
-      path = found;
-      if (this.loading.has(path)) throw new TableError([{ code: 'table-invalid', severity: 'error', message: `${path} builds on itself`, file: path, offset: 0, line: 1, column: 1 }]);
-      this.loading.add(path);
-      text = readFileSync(path, 'utf8');
-    }
-    this.file = path;
-    this.lines = new LineIndex(text, { offset: 0, line: 1, column: 1 });
+  /** Reads and parses one file (or the text given for it); statements that do not parse are reported. */
+  private read(path: string, kind: TableKind, text?: string): Link {
+    const source = text ?? readTableText(path, kind);
+    const link: Link = { file: path, lines: source.split('\n'), statements: [] };
+    this.link = link;
     let statements: StatementSyntax[];
     try {
-      statements = parse(text);
+      statements = parse(source);
     } catch (error) {
       if (!(error instanceof GrammarError)) throw error;
       const start = error.location.start;
       this.problem('table-syntax', { line: start.line, column: start.column }, 'this line is not a statement: a statement starts with a lower-case keyword such as head, left, right or label');
-      this.finish();
-      return [];
+      return link;
     }
-    const valid: StatementSyntax[] = [];
     for (const statement of statements) {
       const checked = statementShapes.safeParse(statement);
-      if (checked.success) valid.push(statement);
+      if (checked.success) link.statements.push(statement);
       else {
         const issue = checked.error.issues[0]!;
         const index = issue.path[0] === 'words' && typeof issue.path[1] === 'number' ? issue.path[1] : -1;
@@ -237,7 +258,7 @@ class TableLoader {
         this.problem(issue.code === 'invalid_union' ? 'table-syntax' : 'table-invalid', at, message);
       }
     }
-    return valid;
+    return link;
   }
 
   private step(statement: StatementSyntax): HeadStep | undefined {
@@ -279,7 +300,7 @@ class TableLoader {
       guards: guards as Matcher[],
       vetoes: vetoes as Matcher[],
       written: patternWords.map((w) => w.text),
-      file: this.file,
+      file: this.link.file,
       line: statement.line,
     };
   }
@@ -322,7 +343,7 @@ class TableLoader {
       }
       conditions.push({ key, test: this.condition(key, syntax.values, w) });
     }
-    return { relation: relationWord!.text, conditions, file: this.file, line: statement.line };
+    return { relation: relationWord!.text, conditions, file: this.link.file, line: statement.line };
   }
 
   private condition(key: LabelCondition['key'], values: string[], w: WordSyntax): LabelCondition['test'] {
@@ -347,29 +368,25 @@ class TableLoader {
     return (candidate: Candidate) => matchers.some((m) => m(candidate));
   }
 
-  private nested<T>(load: () => T, at: WordSyntax): T | undefined {
-    try {
-      return load();
-    } catch (error) {
-      if (!(error instanceof TableError)) throw error;
-      this.problem('table-not-found', at, `cannot build on "${at.text}": ${error.diagnostics[0]?.message ?? 'not found'}`);
-      return undefined;
-    }
-  }
-
   private problem(code: DiagnosticCode, at: { line: number; column: number }, message: string): void {
-    const lines = this.lines ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
-    // Offsets are not needed for table problems: place the diagnostic by line and column.
-    const diagnostic = diagnose(code, message, { file: this.file, offset: 0, lines });
-    const text = lines.text.split('\n')[at.line - 1] ?? '';
-    this.problems.push({ ...diagnostic, line: at.line, column: at.column, excerpt: { text, column: 1 } });
+    if (this.problems.length >= MAX_PROBLEMS) {
+      this.dropped++;
+      return;
+    }
+    const { file, lines } = this.link;
+    const text = (lines[at.line - 1] ?? '').replace(/\r$/, '');
+    this.problems.push({ code, severity: diagnosticCodes[code].severity, message, file, offset: 0, line: at.line, column: at.column, excerpt: { text, column: 1 } });
   }
 
   private finish(): void {
-    if (this.problems.length > 0) {
-      const problems = this.problems;
-      this.problems = [];
-      throw new TableError(problems);
+    if (this.problems.length === 0) return;
+    const problems = this.problems;
+    if (this.dropped > 0) {
+      const last = problems[problems.length - 1]!;
+      problems.push({ ...last, message: `and ${this.dropped} more problem${this.dropped === 1 ? '' : 's'} in this table, not listed`, excerpt: undefined });
     }
+    this.problems = [];
+    this.dropped = 0;
+    throw new TableError(problems);
   }
 }

@@ -10,6 +10,15 @@ import { fieldColumn } from '../formats/conllu/conllu-line.js';
  * ancestor, and `# text` matches the forms and their spacing.
  */
 export function checkDependencyTree(sentence: DependencySentence, report: Report): void {
+  checkHeads(sentence, report);
+  checkText(sentence, report);
+}
+
+/**
+ * The tree part of {@link checkDependencyTree}: HEADs in range, one root,
+ * `root` exactly for HEAD 0, no cycle; each problem at the word it concerns.
+ */
+export function checkHeads(sentence: DependencySentence, report: Report): void {
   const words = sentence.lines.filter((line): line is DependencyWord => line.type === 'word');
   const at = (code: DiagnosticCode, word: { position?: { start: number } }, column: number, message: string) => {
     if (!sentence.source || !word.position) return;
@@ -47,7 +56,6 @@ export function checkDependencyTree(sentence: DependencySentence, report: Report
     const named = cycle.map((id) => `${id} "${words[id - 1]!.form}"`).join(' → ');
     at('cycle', first, column(first, 6), `heads go round in a circle: ${named} → ${cycle[0]}`);
   }
-  checkText(sentence, report);
 }
 
 /** Each cycle of a head vector once, as word numbers from its smallest member on. */

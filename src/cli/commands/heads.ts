@@ -9,8 +9,11 @@ import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { scoreConversion, type ConversionScore } from '../../evaluate/score-conversion.js';
+import { describePairing, emptyTally, pairingIncomplete, type PairingTally } from '../../evaluate/pair-with-gold.js';
+import type { DependencyWord } from '../../model/dependency.js';
 import { collectPhrases, suggestBlocks, writeSuggestedTable } from '../../evaluate/suggest-heads.js';
-import { basename } from 'node:path';
+import { basename, dirname, relative, resolve } from 'node:path';
+import { findTable, headrulesFolder, readTableText } from '../../tables/table-source.js';
 import { wholeNumber } from '../whole-number.js';
 
 export function registerHeads(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -23,12 +26,15 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('-o, --output <file>', 'write the explanation to a file (default: standard output)');
   addConversionOptions(explain);
   addBracketedReadOptions(explain).action(async (file: string, options: Record<string, unknown>) => done(await explainHeads(file, options, io)));
+  const collect = (value: string, previous: string[]) => [...previous, value];
   const score = heads
     .command('score')
     .description('convert bracketed trees and score them against gold dependencies: UAS, LAS and where the head table goes wrong')
     .argument('<files...>', 'bracketed files, in the order of the gold sentences')
-    .requiredOption('--gold <files...>', 'CoNLL-U files with the gold dependencies of the same sentences, in order')
+    .requiredOption('--gold <file>', 'a CoNLL-U file with gold dependencies of the same sentences, in order; repeat it for several files', collect, [])
     .option('--with-punctuation', 'score punctuation too (left out by default)')
+    .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
+    .option('--unscored <key=values>', 'gold words not to score, by a MISC key and its values: Align=absorbed,extra')
     .option('--json', 'print the scores as JSON')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(score);
@@ -37,8 +43,9 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .command('suggest')
     .description('learn from gold dependencies which child heads each phrase, and write a head table that improves on a base table')
     .argument('<files...>', 'bracketed files, in the order of the gold sentences')
-    .requiredOption('--gold <files...>', 'CoNLL-U files with the gold dependencies of the same sentences, in order')
-    .option('--from <table>', 'the base table to build on and keep where it is right', 'generic')
+    .requiredOption('--gold <file>', 'a CoNLL-U file with gold dependencies of the same sentences, in order; repeat it for several files', collect, [])
+    .option('--base <table>', 'the base table to build on and keep where it is right', 'generic')
+    .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
     .requiredOption('-o, --output <file>', 'the new table file')
     .option('--name <name>', 'the new table\'s name (default: from the output file)')
     .addOption(new Option('--min-phrases <n>', 'fewest phrases of a category to change its block').default(30).argParser(wholeNumber(1)))
@@ -98,13 +105,17 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
 async function scoreHeads(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   const settings = conversionSettings(options);
   if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+  if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
   const failures = [...trees.failures, ...gold.failures];
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  const unscored = unscoredTest(options.unscored);
+  if (typeof unscored === 'string') return { code: ExitCode.UsageOrIO, messages: [unscored] };
   const output = Output.to(options.output as string | undefined, io);
   const problems = new ProblemPrinter(io);
   const report = problems.report;
+  const tally = emptyTally();
   try {
     const result = await scoreConversion(
       readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
@@ -112,7 +123,13 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
       settings,
       report,
       options.withPunctuation === true,
+      tally,
+      unscored,
     );
+    if (tally.paired === 0) {
+      await output.abandon();
+      return { code: ExitCode.Findings, messages: [`nothing to score: no tree paired with a gold sentence (${describePairing(tally)})`] };
+    }
     const { scorer, oracle, byParent } = result;
     if (options.json === true) {
       const json = {
@@ -121,30 +138,42 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
         uas: round(scorer.uas),
         las: round(scorer.las),
         oracleUas: round(oracle.uas),
-        misaligned: scorer.score.misaligned,
+        pairing: tally,
         byParent: byParent.map(({ category, words, errors: wrong, examples }) => ({ category, words, errors: wrong, examples })),
       };
       await output.write(JSON.stringify(json, null, 2) + '\n');
     } else {
-      await output.write(formatScore(result, settings.heads.name));
+      await output.write(formatScore(result, settings.heads.name, tally));
     }
     await output.commit();
   } catch (error) {
     await output.abandon();
     throw error;
   }
-  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  io.stderr.write(`treebridge: ${describePairing(tally)}\n`);
+  const strictFailure = options.strict === true && pairingIncomplete(tally);
+  return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
+}
+
+/** `--unscored KEY=V1,V2`: a test for gold words whose MISC has KEY with one of the values. */
+function unscoredTest(value: unknown): ((word: DependencyWord) => boolean) | undefined | string {
+  if (value === undefined) return undefined;
+  const match = /^([^=|\s]+)=([^|\s]+)$/.exec(String(value));
+  if (!match) return `--unscored takes KEY=VALUE[,VALUE…], a MISC key and its values; got "${String(value)}"`;
+  const key = match[1]!;
+  const values = new Set(match[2]!.split(','));
+  return (word) => word.misc.split('|').some((part) => part.startsWith(key + '=') && values.has(part.slice(key.length + 1)));
 }
 
 function round(value: number): number {
   return Math.round(value * 10000) / 10000;
 }
 
-function formatScore(result: ConversionScore, table: string): string {
+function formatScore(result: ConversionScore, table: string, tally: PairingTally): string {
   const { scorer, oracle, byParent, errors } = result;
   const percent = (n: number) => (100 * n).toFixed(2) + '%';
   const lines = [
-    `${scorer.score.sentences} sentences, ${scorer.score.words} words scored${scorer.score.misaligned ? `, ${scorer.score.misaligned} sentences misaligned (left out)` : ''}`,
+    `${scorer.score.sentences} sentences, ${scorer.score.words} words scored${pairingIncomplete(tally) ? ` (${describePairing(tally)})` : ''}`,
     `UAS ${percent(scorer.uas)}   LAS ${percent(scorer.las)}   (oracle of head percolation: UAS ${percent(oracle.uas)})`,
     '',
     'wrong heads by the phrase where the word attaches',
@@ -165,9 +194,10 @@ function formatScore(result: ConversionScore, table: string): string {
 }
 
 async function suggestHeads(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
-  const base = options.from as string;
+  const base = options.base as string;
   const settings = conversionSettings({ ...options, heads: base, punctuation: 'phrase' });
   if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
+  if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
   const failures = [...trees.failures, ...gold.failures];
@@ -176,20 +206,29 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   const report = problems.report;
   const path = options.output as string;
   const name = (options.name as string | undefined) ?? basename(path).replace(/\.heads$/, '');
-  const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings, report);
+  // The new table names its base as it will find it from its own folder; a table never builds on itself.
+  const basePath = findTable(base, 'heads');
+  const target = resolve(io.cwd ?? '.', path);
+  const shippedBase = basePath !== undefined && dirname(basePath) === headrulesFolder();
+  const written = shippedBase ? basename(basePath!).replace(/\.heads$/, '') : basePath ? relative(dirname(target), basePath) || basename(basePath) : base;
+  const inline = basePath !== undefined && resolve(basePath) === target ? readTableText(basePath, 'heads') : undefined;
+  const tally = emptyTally();
+  const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings, report, tally);
+  if (tally.paired === 0) return { code: ExitCode.Findings, messages: [`nothing to learn from: no tree paired with a gold sentence (${describePairing(tally)})`] };
   const { changed, kept } = suggestBlocks(collected.samples, settings.heads, {
     minimumPhrases: options.minPhrases as number,
     minimumGain: options.minGain as number,
   });
   const output = Output.to(path, io);
   try {
-    await output.write(writeSuggestedTable(name, base, collected.sentences, changed, kept) + '\n');
+    await output.write(writeSuggestedTable(name, written, collected.sentences, changed, kept, inline) + '\n');
     await output.commit();
   } catch (error) {
     await output.abandon();
     throw error;
   }
-  const misaligned = collected.misaligned ? `, ${collected.misaligned} left out (words do not line up)` : '';
-  io.stderr.write(`treebridge: learned from ${collected.sentences} sentences${misaligned}: ${changed.length} blocks changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
-  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  const left = pairingIncomplete(tally) ? ` (${describePairing(tally)})` : '';
+  io.stderr.write(`treebridge: learned from ${collected.sentences} sentences${left}: ${changed.length} blocks changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
+  const strictFailure = options.strict === true && pairingIncomplete(tally);
+  return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
 }

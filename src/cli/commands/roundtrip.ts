@@ -4,13 +4,13 @@ import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type R
 import { writeReport } from '../../report/write-report.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
-import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { diagnoseItem } from '../../diagnostics/diagnostic.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { openInputs, Output, type CliIO } from '../io.js';
-import { ProblemPrinter } from '../print-problems.js';
+import { ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
 import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
@@ -46,7 +46,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     categories = loadCategoryTable(options.categories as string);
   } catch (error) {
     if (!(error instanceof TableError)) throw error;
-    return { code: ExitCode.UsageOrIO, messages: error.diagnostics.map((d) => formatDiagnostic(d)) };
+    return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
   }
   const problems = new ProblemPrinter(io);
   let report: RoundTripReport;
@@ -74,7 +74,8 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     let number = 0;
     for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
       number++;
-      trip.add(sentence, sentence.id ?? `${sentence.file}-${number}`);
+      const problem = trip.add(sentence, sentence.id ?? `${sentence.file}-${number}`);
+      if (problem) problems.report(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? number}: ${problem}; left out`, sentence));
     }
     report = trip.report();
     samples = trip.samples;

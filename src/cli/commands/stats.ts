@@ -1,11 +1,11 @@
 import { Option, type Command } from 'commander';
 import { CorpusStructureCounter } from '../../analysis/corpus-structure.js';
 import { formatCorpusStructure } from '../../analysis/format-structure.js';
-import { headVector } from '../../analysis/heads.js';
+import { treeHeads } from '../../analysis/heads.js';
+import { checkHeads } from '../../validate/check-dependency-tree.js';
 import { analyseTree } from '../../analysis/structure.js';
-import type { Diagnostic } from '../../diagnostics/diagnostic.js';
+import { diagnoseItem, type Diagnostic } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
-import { checkDependencyTree } from '../../validate/check-dependency-tree.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { openInputs, Output, type CliIO, type Input } from '../io.js';
@@ -74,15 +74,17 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   };
   try {
     for await (const sentence of sentencesOf(format, inputs, options, settings, problem, io)) {
-      // Only a tree can be measured: a sentence that is not one is reported and left out.
+      // Only a tree can be measured: a sentence that is not one is reported and left out. Other
+      // problems (a # text that does not match, an unknown relation) are validate's business.
       const before = errors;
-      checkDependencyTree(sentence, problem);
-      const heads = headVector(sentence);
-      if (errors > before || !heads) {
+      checkHeads(sentence, problem);
+      const checked = treeHeads(sentence);
+      if ('problem' in checked) {
+        if (errors === before) problem(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? '(no id)'}: ${checked.problem}; left out`, sentence));
         skipped++;
         continue;
       }
-      const structure = analyseTree(heads);
+      const structure = analyseTree(checked.heads);
       counter.add(structure);
       if (options.arcs === true && structure.nonProjectiveArcs.length > 0) {
         const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);

@@ -1,14 +1,14 @@
 import { Option, type Command } from 'commander';
-import { diagnose } from '../../diagnostics/diagnostic.js';
-import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { diagnoseItem } from '../../diagnostics/diagnostic.js';
+import { treeHeads } from '../../analysis/heads.js';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
 import { countDiscontinuousPhrases } from '../../model/terminal-order.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
 import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
-import { decodeBrackets, decodeCarriedTrees } from '../../reverse/decode-brackets.js';
+import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../../reverse/decode-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
-import { ProblemPrinter } from '../print-problems.js';
+import { ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf } from '../read-trees.js';
@@ -40,7 +40,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
     };
   } catch (error) {
     if (!(error instanceof TableError)) throw error;
-    return { code: ExitCode.UsageOrIO, messages: error.diagnostics.map((d) => formatDiagnostic(d)) };
+    return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
   }
   const { inputs, failures } = await openInputs(files, io);
   const output = Output.to(options.output as string | undefined, io);
@@ -56,12 +56,17 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   try {
     for await (const sentence of readSentencesOf(inputs, report, io)) {
       read++;
-      const carried = options.lossless === true ? decodeBrackets(sentence) : undefined;
+      const decoded = options.lossless === true ? decodeBrackets(sentence) : undefined;
+      if (isBrokenCarry(decoded)) {
+        report(diagnoseItem('carried-brackets-broken', `sentence ${sentence.id ?? read}: ${decoded.problem}; skipped`, sentence));
+        continue;
+      }
+      const carried = decoded;
       const result = carried ? { tree: carried, lifts: [] } : buildBrackets(sentence, settings);
       if (!result) {
-        if (sentence.source && sentence.position) {
-          report(diagnose('not-a-tree', 'the heads of this sentence do not form a tree; skipped', { file: sentence.file ?? '-', offset: sentence.position.start, lines: sentence.source }));
-        }
+        const checked = treeHeads(sentence);
+        const why = 'problem' in checked ? checked.problem : 'the heads do not form a tree';
+        report(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? read}: ${why}; skipped`, sentence));
         continue;
       }
       if (settings.discontinuous) discontinuous += countDiscontinuousPhrases(result.tree);

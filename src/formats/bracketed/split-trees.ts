@@ -1,4 +1,5 @@
 import { diagnose, type Diagnostic } from '../../diagnostics/diagnostic.js';
+import { MAX_TREE_DEPTH, MAX_TREE_LENGTH } from '../../model/limits.js';
 import type { DiagnosticCode } from '../../diagnostics/codes.js';
 import { LineIndex } from '../../model/line-index.js';
 import type { Point } from '../../model/position.js';
@@ -107,8 +108,8 @@ export class TreeSplitter {
     options: SplitOptions = {},
   ) {
     this.treeBreaks = options.treeBreaks ?? 'first-column';
-    this.maxTreeLength = options.maxTreeLength ?? 16 * 1024 * 1024;
-    this.maxDepth = options.maxDepth ?? 2000;
+    this.maxTreeLength = options.maxTreeLength ?? MAX_TREE_LENGTH;
+    this.maxDepth = options.maxDepth ?? MAX_TREE_DEPTH;
   }
 
   /** Characters held right now: one open tree and part of a line at most, whatever the input's size. */

@@ -1,7 +1,9 @@
 import type { ConstituentNode, Tree } from '../../model/constituency.js';
 import { formatLabel } from '../../model/label.js';
 import { insertTraces } from '../../reverse/insert-traces.js';
-import { escapeLeaf } from './leaves.js';
+import { escapeLeaf, literalTagTest, readEmptyLeaf } from './leaves.js';
+import { defaultLiteralTags } from './read-options.js';
+import { MAX_TREE_DEPTH } from '../../model/limits.js';
 
 /**
  * How trees are laid out:
@@ -24,85 +26,217 @@ export interface WriteOptions {
 /**
  * Writes one tree, ending with a line feed (and a blank line in the indented
  * layout). A discontinuous tree is first made continuous with `*ICH*` traces
- * (insert-traces), as a bracketing holds only continuous phrases.
+ * (insert-traces), as a bracketing holds only continuous phrases. Trees of any
+ * depth are written without recursion. A tree that a bracketing cannot hold
+ * (see {@link unwritableReason}) throws; check it first.
  */
 export function writeTree(tree: Tree, options: WriteOptions = {}): string {
   if (tree.discontinuous) tree = insertTraces(tree).tree;
-  const parts = tree.children.map((child) => new Part(child));
-  if (tree.id !== undefined) parts.push(Part.leaf(options.idLabel ?? 'ID', escapeLeaf(tree.id)));
-  let top: Part;
-  if (tree.wrapper) top = new Part(null, tree.wrapper.label, parts);
+  const reason = unwritableReason(tree);
+  if (reason) throw new Error(`cannot write tree ${tree.id ?? '(no id)'} as a bracketing: ${reason}`);
+  const brackets = new Brackets();
+  const parts = tree.children.map((child) => brackets.add(child));
+  if (tree.id !== undefined) parts.push(brackets.bracket(options.idLabel ?? 'ID', escapeLeaf(tree.id), []));
+  let top: number;
+  if (tree.wrapper) top = brackets.bracket(tree.wrapper.label, undefined, parts);
   else if (parts.length === 1) top = parts[0]!;
-  else top = new Part(null, '', parts); // several nodes and no wrapper: the empty outer bracket keeps them together
-  if ((options.layout ?? 'line') === 'line') return top.line() + '\n';
-  return top.indented(0, options.width ?? 72) + '\n\n';
+  else top = brackets.bracket('', undefined, parts); // several nodes and no wrapper: the empty outer bracket keeps them together
+  if ((options.layout ?? 'line') === 'line') return brackets.line(top) + '\n';
+  return brackets.indented(top, options.width ?? 72) + '\n\n';
 }
 
 /** Writes a node on one line. */
 export function writeNode(node: ConstituentNode): string {
-  return new Part(node).line();
+  const brackets = new Brackets();
+  return brackets.line(brackets.add(node));
 }
 
-/** A bracket to write: a label with either one leaf or child brackets. */
-class Part {
-  readonly label: string;
-  readonly leaf: string | undefined;
-  readonly children: Part[];
-  private oneLine: string | undefined;
+/** Whitespace, brackets, or nothing at all: what a label or leaf of a bracketing cannot hold. */
+const BROKEN_LABEL = /[\s()]/;
 
-  constructor(node: ConstituentNode | null, label = '', children: Part[] = [], leaf?: string) {
-    if (node === null) {
-      this.label = label;
-      this.children = children;
-      this.leaf = leaf;
-      return;
+/**
+ * Why a tree cannot be written as a bracketing that reads back as the same
+ * tree, or undefined when it can: a label or tag with a space or a bracket in
+ * it (possible in trees read from XML or built from CoNLL-U), an empty tag, a
+ * word with a space in it or none at all, a word that would read back as an
+ * empty element (`0` or `*…` under a tag that is not literal, see
+ * {@link defaultLiteralTags}), an identifier with a space, nesting deeper than
+ * the readers accept ({@link MAX_TREE_DEPTH}).
+ */
+export function unwritableReason(tree: Tree, literalTags: readonly string[] = defaultLiteralTags): string | undefined {
+  const literal = literalTagTest([...literalTags]);
+  if (tree.wrapper && BROKEN_LABEL.test(tree.wrapper.label)) return `the outer label ${JSON.stringify(tree.wrapper.label)} holds a space or a bracket`;
+  if (tree.id !== undefined && (tree.id === '' || /\s/.test(tree.id))) return `the identifier ${JSON.stringify(tree.id)} is empty or holds a space`;
+  // Depth counts brackets as the reader does: the outer one (or the top node) is 1, a word's tag 1 more.
+  const outer = tree.wrapper || tree.children.length !== 1 || tree.id !== undefined ? 1 : 0;
+  const stack = tree.children.map((node) => ({ node, depth: outer + 1 }));
+  while (stack.length > 0) {
+    const { node, depth } = stack.pop()!;
+    if (depth > MAX_TREE_DEPTH) return `it would be nested deeper than ${MAX_TREE_DEPTH} brackets, more than a bracketing may be`;
+    const push = (children: ConstituentNode[]) => {
+      for (const child of children) stack.push({ node: child, depth: depth + 1 });
+    };
+    switch (node.type) {
+      case 'phrase': {
+        const label = formatLabel(node.label);
+        if (label === '' || BROKEN_LABEL.test(label)) return `the label ${JSON.stringify(label)} is empty or holds a space or a bracket`;
+        push(node.children);
+        break;
+      }
+      case 'preterminal': {
+        const tag = node.functions && node.functions.length > 0 ? [node.pos, ...node.functions].join('-') : node.pos;
+        if (tag === '' || BROKEN_LABEL.test(tag)) return `the tag ${JSON.stringify(tag)} is empty or holds a space or a bracket`;
+        const { form, lemma } = node.word;
+        if (form === '' || /\s/.test(form)) return `the word ${JSON.stringify(form)} is empty or holds a space`;
+        if (lemma !== undefined && (lemma === '' || /\s/.test(lemma))) return `the lemma ${JSON.stringify(lemma)} of "${form}" is empty or holds a space`;
+        const leaf = lemma === undefined ? form : `${form}-${lemma}`;
+        if (readEmptyLeaf(leaf, node.pos, literal)) return `the word ${JSON.stringify(leaf)} under ${JSON.stringify(node.pos)} would read back as an empty element`;
+        break;
+      }
+      case 'empty': {
+        const label = formatLabel(node.label);
+        if (label === '' || BROKEN_LABEL.test(label)) return `the label ${JSON.stringify(label)} is empty or holds a space or a bracket`;
+        if (node.text === '' || /[\s()]/.test(node.text)) return `the empty element ${JSON.stringify(node.text)} is empty or holds a space or a bracket`;
+        break;
+      }
+      case 'meta':
+        if (node.label === '' || BROKEN_LABEL.test(node.label)) return `the label ${JSON.stringify(node.label)} is empty or holds a space or a bracket`;
+        push(node.children);
+        break;
     }
+  }
+  return undefined;
+}
+
+/**
+ * The brackets of one tree to write, held in flat arrays (label, leaf,
+ * children by number) so that writing needs no recursion however deep the tree.
+ */
+class Brackets {
+  private readonly labels: string[] = [];
+  private readonly leaves: Array<string | undefined> = [];
+  private readonly children: number[][] = [];
+  /** Length of each bracket written on one line; filled on first need. */
+  private readonly widths: number[] = [];
+
+  bracket(label: string, leaf: string | undefined, children: number[]): number {
+    this.labels.push(label);
+    this.leaves.push(leaf);
+    this.children.push(children);
+    return this.labels.length - 1;
+  }
+
+  /** Adds a node and everything under it; returns its number. */
+  add(root: ConstituentNode): number {
+    const top = this.bracketOf(root);
+    const pending: Array<{ node: ConstituentNode; at: number }> = [{ node: root, at: top }];
+    while (pending.length > 0) {
+      const { node, at } = pending.pop()!;
+      if (node.type !== 'phrase' && node.type !== 'meta') continue;
+      for (const child of node.children) {
+        const number = this.bracketOf(child);
+        this.children[at]!.push(number);
+        pending.push({ node: child, at: number });
+      }
+    }
+    return top;
+  }
+
+  private bracketOf(node: ConstituentNode): number {
     switch (node.type) {
       case 'phrase':
-        this.label = formatLabel(node.label);
-        this.children = node.children.map((child) => new Part(child));
-        break;
+        return this.bracket(formatLabel(node.label), undefined, []);
       case 'preterminal': {
         const { form, lemma } = node.word;
         // Edge labels above a word (XML graph encoding) ride on the tag, where readers of bracketings look for them.
-        this.label = node.functions && node.functions.length > 0 ? [node.pos, ...node.functions].join('-') : node.pos;
-        this.leaf = escapeLeaf(lemma === undefined ? form : `${form}-${lemma}`);
-        this.children = [];
-        break;
+        const label = node.functions && node.functions.length > 0 ? [node.pos, ...node.functions].join('-') : node.pos;
+        return this.bracket(label, escapeLeaf(lemma === undefined ? form : `${form}-${lemma}`), []);
       }
       case 'empty':
-        this.label = formatLabel(node.label);
-        this.leaf = node.text;
-        this.children = [];
-        break;
+        return this.bracket(formatLabel(node.label), node.text, []);
       case 'meta':
-        this.label = node.label;
-        this.leaf = node.text === undefined ? undefined : escapeMetaText(node.text);
-        this.children = node.children.map((child) => new Part(child));
-        break;
+        return this.bracket(node.label, node.text === undefined ? undefined : escapeMetaText(node.text), []);
     }
   }
 
-  static leaf(label: string, text: string): Part {
-    return new Part(null, label, [], text);
-  }
-
-  line(): string {
-    if (this.oneLine === undefined) {
-      const inside = this.leaf !== undefined ? [this.leaf] : this.children.map((child) => child.line());
-      this.oneLine = `(${this.label} ${inside.join(' ')})`;
+  /** One line: `(label leaf)` or `(label child child …)`. */
+  line(top: number): string {
+    const out: string[] = [];
+    // Tasks: a bracket number to open, or a piece of text to put out as it is.
+    const tasks: Array<number | string> = [top];
+    while (tasks.length > 0) {
+      const task = tasks.pop()!;
+      if (typeof task === 'string') {
+        out.push(task);
+        continue;
+      }
+      const leaf = this.leaves[task];
+      out.push(`(${this.labels[task]} `);
+      if (leaf !== undefined) {
+        out.push(leaf, ')');
+        continue;
+      }
+      const children = this.children[task]!;
+      tasks.push(')');
+      for (let k = children.length - 1; k >= 0; k--) {
+        tasks.push(children[k]!);
+        if (k > 0) tasks.push(' ');
+      }
     }
-    return this.oneLine;
+    return out.join('');
   }
 
-  indented(indent: number, width: number): string {
-    const flat = this.line();
-    if (this.leaf !== undefined || indent + flat.length <= width) return flat;
-    const pad = ' '.repeat(indent + 2);
-    const lines = this.children.map((child) => child.indented(indent + 2, width));
-    // An unlabelled outer bracket has nothing to stand on its first line: its first child does.
-    if (this.label === '') return `( ${lines.map((line, i) => (i === 0 ? line : pad + line)).join('\n')})`;
-    return `(${this.label}\n${lines.map((line) => pad + line).join('\n')})`;
+  /** The length of a bracket written on one line, for every bracket under `top`. */
+  private measure(top: number): void {
+    if (this.widths[top] !== undefined) return;
+    const order: number[] = [];
+    const stack = [top];
+    while (stack.length > 0) {
+      const at = stack.pop()!;
+      order.push(at);
+      stack.push(...this.children[at]!);
+    }
+    for (let k = order.length - 1; k >= 0; k--) {
+      const at = order[k]!;
+      const leaf = this.leaves[at];
+      const children = this.children[at]!;
+      let inside = leaf !== undefined ? leaf.length : Math.max(0, children.length - 1);
+      if (leaf === undefined) for (const child of children) inside += this.widths[child]!;
+      this.widths[at] = this.labels[at]!.length + inside + 3;
+    }
+  }
+
+  /**
+   * The indented layout: a bracket that fits in `width` from its indent stays
+   * on one line; otherwise each child goes on a line of its own, two spaces
+   * deeper. An unlabelled outer bracket puts its first child on its own line.
+   */
+  indented(top: number, width: number): string {
+    this.measure(top);
+    const out: string[] = [];
+    const tasks: Array<{ at: number; indent: number } | string> = [{ at: top, indent: 0 }];
+    while (tasks.length > 0) {
+      const task = tasks.pop()!;
+      if (typeof task === 'string') {
+        out.push(task);
+        continue;
+      }
+      const { at, indent } = task;
+      if (this.leaves[at] !== undefined || indent + this.widths[at]! <= width) {
+        out.push(this.line(at));
+        continue;
+      }
+      const pad = '\n' + ' '.repeat(indent + 2);
+      const children = this.children[at]!;
+      const unlabelled = this.labels[at] === '';
+      out.push(unlabelled ? '( ' : `(${this.labels[at]}`);
+      tasks.push(')');
+      for (let k = children.length - 1; k >= 0; k--) {
+        tasks.push({ at: children[k]!, indent: indent + 2 });
+        if (k > 0 || !unlabelled) tasks.push(pad);
+      }
+    }
+    return out.join('');
   }
 }
 

@@ -9,13 +9,14 @@ import { readEmptyLeaf } from '../bracketed/leaves.js';
 import type { EdgeRecord, NodeRecord, SentenceRecord } from './graph-records.js';
 import { ABSENT, EMPTY, EMPTY_POS, KIND, NOTE, NOTE_BRACKETS, WRAPPER } from './xml-graph-names.js';
 import { readBracketedText } from '../bracketed/read-bracketed.js';
+import { MAX_TREE_DEPTH } from '../../model/limits.js';
 
 /** Attributes the model holds in fields of its own; every other attribute is kept in `attributes`. */
 const TERMINAL_FIELDS = new Set(['id', 'word', 'lemma', 'pos', KIND]);
 const PHRASE_FIELDS = new Set(['id', 'cat', 'coindex', 'gapindex', KIND]);
 
-/** Deepest graph accepted: the passes that walk trees recurse once per level. */
-const MAX_GRAPH_DEPTH = 2000;
+/** Deepest graph accepted: the same limit as bracketings (see model/limits). */
+const MAX_GRAPH_DEPTH = MAX_TREE_DEPTH;
 
 /**
  * Builds the tree of one sentence of the XML graph encoding, after checking

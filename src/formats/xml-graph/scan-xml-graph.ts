@@ -1,3 +1,4 @@
+import { MAX_TREE_LENGTH } from '../../model/limits.js';
 import type { SAXParser } from 'sax';
 import xml2js from 'xml2js';
 import { diagnose, type Report } from '../../diagnostics/diagnostic.js';
@@ -16,7 +17,7 @@ export interface XmlLimits {
   maxOutsideLength: number;
 }
 
-export const defaultXmlLimits: XmlLimits = { maxDepth: 64, maxSentenceLength: 16 * 1024 * 1024, maxOutsideLength: 16 * 1024 * 1024 };
+export const defaultXmlLimits: XmlLimits = { maxDepth: 64, maxSentenceLength: MAX_TREE_LENGTH, maxOutsideLength: MAX_TREE_LENGTH };
 
 /** Elements of the encoding and where each may stand; anything else inside a sentence is reported. */
 const PARENTS: ReadonlyMap<string, readonly string[]> = new Map([

@@ -1,0 +1,122 @@
+import { diagnoseItem, type Report } from '../diagnostics/diagnostic.js';
+import { reportWordlessTree } from '../convert/report-wordless-tree.js';
+import { prepareTree, type TraceMode } from '../convert/prepare-tree.js';
+import type { WordNode } from '../convert/conversion-tree.js';
+import type { Tree } from '../model/constituency.js';
+import type { DependencySentence, DependencyWord } from '../model/dependency.js';
+import { sameForm } from './score-attachments.js';
+
+/** A tree and its gold sentence, whose words line up one for one. */
+export interface GoldPair {
+  tree: Tree;
+  gold: DependencySentence;
+  /** The tree's id, else the gold sentence's, else its number among the pairs. */
+  id: string;
+}
+
+/** How the pairing went: every tree and every gold sentence is in exactly one of these counts. */
+export interface PairingTally {
+  /** Pairs whose words line up. */
+  paired: number;
+  /** Pairs whose words do not line up (each reported, naming both ids). */
+  misaligned: number;
+  /** Trees with words left over when the gold ran out. */
+  treesWithoutGold: number;
+  /** Gold sentences left over when the trees ran out. */
+  goldWithoutTree: number;
+  /** Trees without words: they take no gold sentence. */
+  wordless: number;
+}
+
+export function emptyTally(): PairingTally {
+  return { paired: 0, misaligned: 0, treesWithoutGold: 0, goldWithoutTree: 0, wordless: 0 };
+}
+
+/**
+ * Pairs trees with gold sentences, the one way `heads score` and `heads
+ * suggest` both use: in order, a tree without words taking none (it is
+ * reported); a pair counts when the words line up by number and form (bracket
+ * tokens such as `-LRB-` read as brackets). A pair that does not line up is
+ * reported with both ids and left out; trees or gold sentences left over at
+ * the end are counted and reported once, at the first of them.
+ */
+export async function* pairWithGold(
+  trees: AsyncIterable<Tree>,
+  gold: AsyncIterable<DependencySentence>,
+  traces: TraceMode,
+  report: Report,
+  tally: PairingTally,
+): AsyncGenerator<GoldPair> {
+  const goldIterator = gold[Symbol.asyncIterator]();
+  const treeIterator = trees[Symbol.asyncIterator]();
+  try {
+    for (;;) {
+      const nextTree = await treeIterator.next();
+      if (nextTree.done) break;
+      const tree = nextTree.value;
+      const prepared = prepareTree(tree, traces);
+      if (!prepared) {
+        tally.wordless++;
+        reportWordlessTree(tree, report);
+        continue;
+      }
+      const nextGold = await goldIterator.next();
+      if (nextGold.done) {
+        let left = 1;
+        for (;;) {
+          const more = await treeIterator.next();
+          if (more.done) break;
+          if (prepareTree(more.value, 'surface')) left++;
+          else tally.wordless++;
+        }
+        tally.treesWithoutGold += left;
+        report(diagnoseItem('unpaired', `the gold ran out: tree ${tree.id ?? '(no id)'} and ${left - 1} more tree${left - 1 === 1 ? '' : 's'} after it have no gold sentence; left out`, tree));
+        break;
+      }
+      const goldSentence = nextGold.value;
+      const id = tree.id ?? goldSentence.id ?? String(tally.paired + tally.misaligned + 1);
+      const problem = alignmentProblem(prepared.words, goldSentence);
+      if (problem) {
+        tally.misaligned++;
+        report(diagnoseItem('misaligned', `tree ${tree.id ?? '(no id)'} and gold sentence ${goldSentence.id ?? '(no id)'} do not line up: ${problem}; left out`, tree));
+        continue;
+      }
+      tally.paired++;
+      yield { tree, gold: goldSentence, id };
+    }
+    const extra = await goldIterator.next();
+    if (!extra.done) {
+      let left = 1;
+      while (!(await goldIterator.next()).done) left++;
+      tally.goldWithoutTree += left;
+      report(diagnoseItem('unpaired', `the trees ran out: gold sentence ${extra.value.id ?? '(no id)'} and ${left - 1} more after it have no tree; left out`, extra.value));
+    }
+  } finally {
+    await goldIterator.return?.();
+    await treeIterator.return?.();
+  }
+}
+
+/** Why a tree's words and a gold sentence's words do not line up, or undefined when they do. */
+function alignmentProblem(words: WordNode[], gold: DependencySentence): string | undefined {
+  const goldWords = gold.lines.filter((line): line is DependencyWord => line.type === 'word');
+  if (words.length !== goldWords.length) return `${words.length} words against ${goldWords.length}`;
+  const at = words.findIndex((word, i) => !sameForm(word.form, goldWords[i]!.form));
+  if (at !== -1) return `word ${at + 1} is "${words[at]!.form}" against "${goldWords[at]!.form}"`;
+  return undefined;
+}
+
+/** A line for people: how many pairs, and what was left out. */
+export function describePairing(tally: PairingTally): string {
+  const parts = [`${tally.paired} sentence pair${tally.paired === 1 ? '' : 's'}`];
+  if (tally.misaligned) parts.push(`${tally.misaligned} misaligned`);
+  if (tally.treesWithoutGold) parts.push(`${tally.treesWithoutGold} tree${tally.treesWithoutGold === 1 ? '' : 's'} without gold`);
+  if (tally.goldWithoutTree) parts.push(`${tally.goldWithoutTree} gold sentence${tally.goldWithoutTree === 1 ? '' : 's'} without tree`);
+  if (tally.wordless) parts.push(`${tally.wordless} tree${tally.wordless === 1 ? '' : 's'} without words`);
+  return parts.join(', ');
+}
+
+/** True when something was left out of the pairing (for --strict). */
+export function pairingIncomplete(tally: PairingTally): boolean {
+  return tally.misaligned + tally.treesWithoutGold + tally.goldWithoutTree > 0;
+}
