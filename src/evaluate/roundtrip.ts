@@ -1,5 +1,6 @@
 import { convertTree, type ConversionSettings } from '../convert/convert-tree.js';
 import type { ConstituentNode, Tree } from '../model/constituency.js';
+import { nodesBottomUp, nodesTopDown } from '../model/traverse.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
 import { treeHeads } from '../analysis/heads.js';
@@ -71,38 +72,36 @@ interface Word {
 export function spansOf(tree: Tree, leaveOut?: (pos: string) => boolean): { spans: Array<Span & { functions: number }>; words: Word[] } {
   const words: Word[] = [];
   const spans: Array<Span & { functions: number }> = [];
-  const visit = (node: ConstituentNode): [number, number] | undefined => {
+  // Bottom-up: a phrase's span runs from the first to the last word of its children's spans.
+  const ranges = new Map<ConstituentNode, [number, number]>();
+  for (const node of nodesBottomUp(tree.children)) {
     if (node.type === 'preterminal') {
-      if (leaveOut?.(node.pos)) return undefined;
+      if (leaveOut?.(node.pos)) continue;
       const index = words.length;
       words.push({ index, pos: node.pos, form: node.word.form });
-      return [index, index + 1];
+      ranges.set(node, [index, index + 1]);
+      continue;
     }
-    if (node.type !== 'phrase') return undefined;
+    if (node.type !== 'phrase') continue;
     let start = Infinity;
     let end = -Infinity;
     for (const child of node.children) {
-      const range = visit(child);
-      if (range) {
-        start = Math.min(start, range[0]);
-        end = Math.max(end, range[1]);
-      }
+      const range = ranges.get(child);
+      if (!range) continue;
+      start = Math.min(start, range[0]);
+      end = Math.max(end, range[1]);
+      ranges.delete(child);
     }
-    if (start === Infinity) return undefined;
+    if (start === Infinity) continue;
     spans.push({ label: node.label.category, start, end, functions: node.label.functions.length });
-    return [start, end];
-  };
-  tree.children.forEach(visit);
+    ranges.set(node, [start, end]);
+  }
   return { spans, words };
 }
 
 function countNodes(tree: Tree, test: (node: ConstituentNode) => boolean): number {
   let count = 0;
-  const visit = (node: ConstituentNode) => {
-    if (test(node)) count++;
-    if (node.type === 'phrase') node.children.forEach(visit);
-  };
-  tree.children.forEach(visit);
+  for (const node of nodesTopDown(tree.children)) if (test(node)) count++;
   return count;
 }
 

@@ -6,6 +6,7 @@
  * dashed. Every corpus string is escaped.
  */
 import type { ConstituentNode, Tree } from '../model/constituency.js';
+import { nodesBottomUp } from '../model/traverse.js';
 import { formatLabel } from '../model/label.js';
 
 export function escapeHtml(text: string): string {
@@ -61,28 +62,30 @@ export function drawBracketing(tree: Tree, marked: ReadonlySet<string>, markClas
   const words: string[] = [];
   const tags: string[] = [];
   const bars: Bar[] = [];
-  const visit = (node: ConstituentNode): { start: number; end: number; level: number } | undefined => {
+  // Bottom-up: a phrase's bar spans its children's and stands one level above the highest of them.
+  const spans = new Map<ConstituentNode, { start: number; end: number; level: number }>();
+  for (const node of nodesBottomUp(tree.children)) {
     if (node.type === 'preterminal') {
       words.push(node.word.form);
       tags.push(node.pos);
-      return { start: words.length - 1, end: words.length, level: 0 };
+      spans.set(node, { start: words.length - 1, end: words.length, level: 0 });
+      continue;
     }
-    if (node.type !== 'phrase') return undefined;
+    if (node.type !== 'phrase') continue;
     let start = Infinity;
     let end = -Infinity;
     let level = 0;
     for (const child of node.children) {
-      const span = visit(child);
+      const span = spans.get(child);
       if (!span) continue;
       start = Math.min(start, span.start);
       end = Math.max(end, span.end);
       level = Math.max(level, span.level);
     }
-    if (start === Infinity) return undefined;
+    if (start === Infinity) continue;
     bars.push({ label: formatLabel(node.label), start, end, level: level + 1 });
-    return { start, end, level: level + 1 };
-  };
-  tree.children.forEach(visit);
+    spans.set(node, { start, end, level: level + 1 });
+  }
   const { boxes, width } = layoutWords(words);
   const levels = Math.max(0, ...bars.map((b) => b.level));
   const top = levels * ROW;

@@ -46,7 +46,7 @@ describe('item 4: tables that build on themselves', () => {
   });
 
   it('loads a chain within the limit, the nearest table winning', () => {
-    const base = table('base.heads', 'table base\nbuilds-on generic\nhead NP\n  right first\n');
+    table('base.heads', 'table base\nbuilds-on generic\nhead NP\n  right first\n');
     const top = table('top.heads', 'table top\nbuilds-on base.heads\nhead VP\n  left first\n');
     const loaded = loadHeadTable(top);
     expect(loaded.name).toBe('top');

@@ -82,14 +82,15 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
       }
       findHeads(prepared.root, settings.heads, settings.coordination);
       const lines: string[] = [`${tree.id ?? `tree ${number}`} (${where}), heads by ${settings.heads.name}`];
-      const visit = (node: ConversionNode, depth: number) => {
-        if (node.kind !== 'phrase') return;
+      const stack: Array<{ node: ConversionNode; depth: number }> = [{ node: prepared.root, depth: 0 }];
+      while (stack.length > 0) {
+        const { node, depth } = stack.pop()!;
+        if (node.kind !== 'phrase') continue;
         const head = node.children[node.head!.child]!;
         const headLabel = head.kind === 'word' ? head.pos : head.label;
         lines.push(`${'  '.repeat(depth + 1)}${node.label || '(top)'} → ${headLabel} "${headWordOf(node).form}": ${node.head!.reason}`);
-        for (const child of node.children) visit(child, depth + 1);
-      };
-      visit(prepared.root, 0);
+        for (let i = node.children.length - 1; i >= 0; i--) stack.push({ node: node.children[i]!, depth: depth + 1 });
+      }
       await output.write(lines.join('\n') + '\n\n');
       if (wanted !== undefined) break;
     }

@@ -1,4 +1,5 @@
 import type { ConstituentNode, Phrase, Tree } from '../../model/constituency.js';
+import { nodesTopDown } from '../../model/traverse.js';
 import { formatLabel } from '../../model/label.js';
 import { numberTerminals, terminalsInOrder, type Terminal } from '../../model/terminal-order.js';
 import { writeNode } from '../bracketed/write-bracketed.js';
@@ -38,13 +39,7 @@ export function xmlDocumentEnd(): string {
 export function writeXmlSentence(tree: Tree, ordinal: number): string {
   const numbered = numberTerminals(tree);
   const terminals = terminalsInOrder(numbered);
-  const phrases: Phrase[] = [];
-  const collect = (node: ConstituentNode) => {
-    if (node.type !== 'phrase') return;
-    phrases.push(node);
-    node.children.forEach(collect);
-  };
-  numbered.children.forEach(collect);
+  const phrases = nodesTopDown(numbered.children).filter((node): node is Phrase => node.type === 'phrase');
   const ids = idsFor(terminals, phrases, ordinal);
 
   const secondary = new Map<ConstituentNode, Element[]>();
