@@ -108,11 +108,12 @@ function alignmentProblem(words: WordNode[], gold: DependencySentence): string |
 
 /** A line for people: how many pairs, and what was left out. */
 export function describePairing(tally: PairingTally): string {
-  const parts = [`${tally.paired} sentence pair${tally.paired === 1 ? '' : 's'}`];
-  if (tally.misaligned) parts.push(`${tally.misaligned} misaligned`);
-  if (tally.treesWithoutGold) parts.push(`${tally.treesWithoutGold} tree${tally.treesWithoutGold === 1 ? '' : 's'} without gold`);
-  if (tally.goldWithoutTree) parts.push(`${tally.goldWithoutTree} gold sentence${tally.goldWithoutTree === 1 ? '' : 's'} without tree`);
-  if (tally.wordless) parts.push(`${tally.wordless} tree${tally.wordless === 1 ? '' : 's'} without words`);
+  const count = (n: number, one: string, many = `${one}s`) => `${n.toLocaleString('en-US')} ${n === 1 ? one : many}`;
+  const parts = [count(tally.paired, 'sentence pair')];
+  if (tally.misaligned) parts.push(`${tally.misaligned.toLocaleString('en-US')} misaligned`);
+  if (tally.treesWithoutGold) parts.push(`${count(tally.treesWithoutGold, 'tree')} without gold`);
+  if (tally.goldWithoutTree) parts.push(`${count(tally.goldWithoutTree, 'gold sentence')} without tree`);
+  if (tally.wordless) parts.push(`${count(tally.wordless, 'tree')} without words`);
   return parts.join(', ');
 }
 

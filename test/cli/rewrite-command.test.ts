@@ -19,7 +19,7 @@ describe('treebridge rewrite', () => {
     });
     expect(code).toBe(1);
     expect(stdout).toBe('(S (NP (N Fog)) (VP (V lifted)))\n\n');
-    expect(stderr).toMatch(/^-:2:\d+: error: .+ \[[a-z-]+\]\n$/);
+    expect(stderr).toMatch(/^-:2:\d+: error: .+ \[[a-z-]+\]\ntreebridge: 1 tree read: 1 written, 0 skipped; 1 error, 0 warnings\n$/);
   });
 
   it('rejects an unknown layout with exit 2', async () => {

@@ -21,7 +21,7 @@ describe('treebridge to-deps', () => {
     const { code, stderr, stdout } = await cli(['to-deps', '--heads', 'penn-historical', '--lemmas', demo('ferry-log.psd')]);
     expect(code).toBe(0);
     expect(stderr).toMatch(/ferry-log\.psd:1:1: warning: tree has no words .* \[nothing-to-convert\]/);
-    expect(stderr).toMatch(/9 trees read: 7 converted, 2 skipped\n$/);
+    expect(stderr).toMatch(/9 trees read: 7 converted, 2 skipped; 0 errors, 2 warnings\n$/);
     expect(stdout.match(/^# sent_id/gm)).toHaveLength(7);
   });
 

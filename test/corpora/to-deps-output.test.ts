@@ -20,12 +20,12 @@ describe.each([
     const files = corpusFiles(folder, extension);
     const converted = await cli(['to-deps', ...options, '-o', out, ...files]);
     expect(converted.code).toBe(0);
-    const summary = /(\d+) trees? read: (\d+) converted, (\d+) skipped/.exec(converted.stderr)!;
-    expect(Number(summary[2]) + Number(summary[3])).toBe(Number(summary[1]));
+    const summary = /([\d,]+) trees? read: ([\d,]+) converted, ([\d,]+) skipped/.exec(converted.stderr)!;
+    expect(Number(summary[2]!.replace(/,/g, '')) + Number(summary[3]!.replace(/,/g, ''))).toBe(Number(summary[1]!.replace(/,/g, '')));
     // Relations from function tags (IcePaHC) are not UD relations: those warnings are expected; errors are not.
     const checked = await cli(['validate', out]);
     const last = checked.stdout.trimEnd().split('\n').pop()!;
-    expect(last).toMatch(new RegExp(`^1 file, ${summary[2]} sentences, \\d+ words: 0 errors, \\d+ warnings?$`));
+    expect(last).toMatch(new RegExp(`^1 file, ${summary[2]} sentences, [\\d,]+ words: 0 errors, [\\d,]+ warnings?$`));
     const ours = readConlluText(readFileSync(out, 'utf8'), {}, () => undefined).map((s) =>
       JSON.stringify(s.lines.map((l) => Number(l.head))),
     );

@@ -53,12 +53,12 @@ describe('IcePaHC through the XML graph encoding', () => {
     const xml = join(dir, 'icepahc.xml');
     const written = await cli(['rewrite', '--lemmas', '--traces', 'resolve', '-o', xml, ...files]);
     expect(written.code).toBe(0);
-    const [, read, out, moved] = /(\d+) trees read, (\d+) written; (\d+) antecedents moved/.exec(written.stderr)!;
+    const [, read, out, moved] = /([\d,]+) trees read: ([\d,]+) written, 0 skipped; ([\d,]+) antecedents moved/.exec(written.stderr)!;
     expect(out).toBe(read);
 
     const check = checkWithElementTree(xml);
     expect(check.examples).toEqual([]);
-    expect(check.sentences).toBe(Number(read));
+    expect(check.sentences).toBe(Number(read!.replace(/,/g, '')));
 
     const viaXml = join(dir, 'via-xml.conllu');
     const restored = join(dir, 'restored.conllu');
@@ -77,7 +77,7 @@ describe('IcePaHC through the XML graph encoding', () => {
     const bracketed = join(dir, 'back.psd');
     const rewritten = await cli(['rewrite', '-o', bracketed, xml]);
     expect(rewritten.code).toBe(0);
-    const inserted = Number(/(\d+) \*ICH\* traces? put in/.exec(rewritten.stderr)![1]);
+    const inserted = Number(/([\d,]+) \*ICH\* traces? put in/.exec(rewritten.stderr)![1]!.replace(/,/g, ''));
     const viaTraces = join(dir, 'via-traces.conllu');
     expect((await cli(['to-deps', '--lemmas', '--heads', 'penn-historical', '--traces', 'restore', '-o', viaTraces, bracketed])).code).toBe(0);
     const c = arcs(readFileSync(viaTraces, 'utf8'));
@@ -136,16 +136,16 @@ describe.each([
     const xml = join(dir, 'graphs.xml');
     const built = await cli(['to-brackets', '--to', 'xml', '-o', xml, ...files]);
     expect(built.code).toBe(0);
-    const [, read, written, discontinuous] = /(\d+) sentences read: (\d+) written, 0 skipped; (\d+) discontinuous phrases?/.exec(built.stderr)!;
+    const [, read, written, discontinuous] = /([\d,]+) sentences read: ([\d,]+) written, 0 skipped; ([\d,]+) discontinuous phrases?/.exec(built.stderr)!;
     expect(written).toBe(read);
 
     const check = checkWithElementTree(xml);
     expect(check.examples).toEqual([]);
-    expect(check.sentences).toBe(Number(read));
-    expect(check.discontinuous).toBe(Number(discontinuous));
+    expect(check.sentences).toBe(Number(read!.replace(/,/g, '')));
+    expect(check.discontinuous).toBe(Number(discontinuous!.replace(/,/g, '')));
 
     const stats = JSON.parse((await cli(['stats', '--json', ...files])).stdout);
-    expect(Number(discontinuous)).toBe(stats.gappedWords);
+    expect(Number(discontinuous!.replace(/,/g, ''))).toBe(stats.gappedWords);
 
     const back = join(dir, 'back.conllu');
     expect((await cli(['to-deps', '--heads', 'ud', '-o', back, xml])).code).toBe(0);

@@ -4,7 +4,7 @@ import { findHeads } from '../../convert/find-heads.js';
 import { prepareTree } from '../../convert/prepare-tree.js';
 import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
-import { ProblemPrinter } from '../print-problems.js';
+import { addListingOptions, listingOf, plural, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
@@ -25,6 +25,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .addOption(new Option('--sentence <n>', 'only the nth tree of the file (from 1)').argParser(wholeNumber(1)))
     .option('-o, --output <file>', 'write the explanation to a file (default: standard output)');
   addConversionOptions(explain);
+  addListingOptions(explain);
   addBracketedReadOptions(explain).action(async (file: string, options: Record<string, unknown>) => done(await explainHeads(file, options, io)));
   const collect = (value: string, previous: string[]) => [...previous, value];
   const score = heads
@@ -38,6 +39,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('--json', 'print the scores as JSON')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(score);
+  addListingOptions(score);
   addBracketedReadOptions(score).action(async (files: string[], options: Record<string, unknown>) => done(await scoreHeads(files, options, io)));
   const suggest = heads
     .command('suggest')
@@ -52,6 +54,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .addOption(new Option('--min-gain <share>', 'least gain, as a share of the phrases, to change a block').default(0.01).argParser(Number.parseFloat))
     .addOption(new Option('--coordination <style>', 'coordination style (its phrases are left out of learning)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
     .addOption(new Option('--traces <mode>', 'where antecedents of traces attach').choices(['surface', 'restore']).default('surface'));
+  addListingOptions(suggest);
   addBracketedReadOptions(suggest).action(async (files: string[], options: Record<string, unknown>) => done(await suggestHeads(files, options, io)));
   for (const command of heads.commands) {
     command.exitOverride().configureOutput({ writeOut: (text) => io.stdout.write(text), writeErr: (text) => io.stderr.write(text) });
@@ -67,7 +70,7 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
   const { inputs, failures } = await openInputs([file], io);
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   const output = Output.to(options.output as string | undefined, io);
-  const problems = new ProblemPrinter(io);
+  const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   let number = 0;
   try {
@@ -99,6 +102,7 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
     await output.abandon();
     throw error;
   }
+  problems.printSummary();
   if (wanted !== undefined && number < wanted) return { code: ExitCode.UsageOrIO, messages: [`${file} has ${number} trees; there is no tree ${wanted}`] };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
@@ -114,7 +118,7 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
   const unscored = unscoredTest(options.unscored);
   if (typeof unscored === 'string') return { code: ExitCode.UsageOrIO, messages: [unscored] };
   const output = Output.to(options.output as string | undefined, io);
-  const problems = new ProblemPrinter(io);
+  const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const tally = emptyTally();
   try {
@@ -151,6 +155,7 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
     await output.abandon();
     throw error;
   }
+  problems.printSummary();
   io.stderr.write(`treebridge: ${describePairing(tally)}\n`);
   const strictFailure = options.strict === true && pairingIncomplete(tally);
   return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
@@ -174,7 +179,7 @@ function formatScore(result: ConversionScore, table: string, tally: PairingTally
   const { scorer, oracle, byParent, errors } = result;
   const percent = (n: number) => (100 * n).toFixed(2) + '%';
   const lines = [
-    `${scorer.score.sentences} sentences, ${scorer.score.words} words scored${pairingIncomplete(tally) ? ` (${describePairing(tally)})` : ''}`,
+    `${plural(scorer.score.sentences, 'sentence')}, ${plural(scorer.score.words, 'word')} scored${pairingIncomplete(tally) ? ` (${describePairing(tally)})` : ''}`,
     `UAS ${percent(scorer.uas)}   LAS ${percent(scorer.las)}   (oracle of head percolation: UAS ${percent(oracle.uas)})`,
     '',
     'wrong heads by the phrase where the word attaches',
@@ -182,7 +187,7 @@ function formatScore(result: ConversionScore, table: string, tally: PairingTally
   ];
   for (const tally of byParent.slice(0, 15)) {
     const share = tally.words ? ((100 * tally.errors) / tally.words).toFixed(1) + '%' : '';
-    lines.push(`  ${tally.category.padEnd(10)} ${String(tally.words).padStart(8)} ${String(tally.errors).padStart(7)} ${share.padStart(7)}  ${tally.examples.join(' ')}`);
+    lines.push(`  ${tally.category.padEnd(10)} ${tally.words.toLocaleString('en-US').padStart(8)} ${tally.errors.toLocaleString('en-US').padStart(7)} ${share.padStart(7)}  ${tally.examples.join(' ')}`);
   }
   const bySteps = new Map<string, number>();
   for (const error of errors) {
@@ -190,7 +195,7 @@ function formatScore(result: ConversionScore, table: string, tally: PairingTally
     bySteps.set(key, (bySteps.get(key) ?? 0) + 1);
   }
   lines.push('', 'wrong heads by the step of the table that chose the head');
-  for (const [key, n] of [...bySteps].sort((a, b) => b[1] - a[1]).slice(0, 10)) lines.push(`  ${String(n).padStart(7)}  ${key}`);
+  for (const [key, n] of [...bySteps].sort((a, b) => b[1] - a[1]).slice(0, 10)) lines.push(`  ${n.toLocaleString('en-US').padStart(7)}  ${key}`);
   return lines.join('\n') + '\n';
 }
 
@@ -203,7 +208,7 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   const gold = await openInputs(options.gold as string[], io);
   const failures = [...trees.failures, ...gold.failures];
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  const problems = new ProblemPrinter(io);
+  const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const path = options.output as string;
   const name = (options.name as string | undefined) ?? basename(path).replace(/\.heads$/, '');
@@ -228,8 +233,9 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
     await output.abandon();
     throw error;
   }
+  problems.printSummary();
   const left = pairingIncomplete(tally) ? ` (${describePairing(tally)})` : '';
-  io.stderr.write(`treebridge: learned from ${collected.sentences} sentences${left}: ${changed.length} blocks changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
+  io.stderr.write(`treebridge: learned from ${plural(collected.sentences, 'sentence')}${left}: ${plural(changed.length, 'block')} changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
   const strictFailure = options.strict === true && pairingIncomplete(tally);
   return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
 }

@@ -1,5 +1,4 @@
 import { Option, type Command } from 'commander';
-import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
 import { resolveTraces } from '../../convert/resolve-traces.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
@@ -7,6 +6,7 @@ import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } fr
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readTreesOf } from '../read-trees.js';
+import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 
 export function registerRewrite(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -18,6 +18,7 @@ export function registerRewrite(program: Command, io: CliIO, done: (result: Comm
     .addOption(new Option('--traces <mode>', 'keep: traces stay empty elements; resolve: antecedents of *T* *ICH* *EXP* *RNR* become discontinuous children where their traces stood').choices(['keep', 'resolve']).default('keep'))
     .option('-o, --output <file>', 'write the trees to a file (default: standard output)');
   addTreeFormatOption(command);
+  addListingOptions(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => {
     done(await rewrite(files, options, io));
   });
@@ -27,11 +28,8 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
   const { inputs, failures } = await openInputs(files, io);
   const output = Output.to(options.output as string | undefined, io);
   const layout = options.layout as Layout;
-  let errors = 0;
-  const report = (diagnostic: Parameters<typeof formatDiagnostic>[0]) => {
-    if (diagnostic.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(diagnostic) + '\n');
-  };
+  const problems = new ProblemPrinter(io, listingOf(options));
+  const report = problems.report;
   const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), layout, report);
   let read = 0;
   let written = 0;
@@ -60,9 +58,8 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
     leftover > 0 ? `${leftover} further trace${leftover === 1 ? '' : 's'} of an antecedent that had moved already left as empty element${leftover === 1 ? '' : 's'}` : '',
     sink.tracesInserted > 0 ? `${sink.tracesInserted} *ICH* trace${sink.tracesInserted === 1 ? '' : 's'} put in for discontinuous phrases` : '',
   ].filter(Boolean);
-  if (options.traces === 'resolve' || sink.tracesInserted > 0 || read !== written) {
-    io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read, ${written} written${notes.length > 0 ? '; ' + notes.join('; ') : ''}\n`);
-  }
+  problems.printSummary();
+  io.stderr.write(closingLine(read, 'tree', [[written, 'written'], [read - written, 'skipped']], notes, problems));
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

@@ -10,7 +10,7 @@ import { addConversionOptions, conversionSettings } from '../conversion-options.
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { openInputs, Output, type CliIO } from '../io.js';
-import { ProblemPrinter, tableErrorLines } from '../print-problems.js';
+import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
 import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
@@ -26,11 +26,12 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .addOption(new Option('--score-punctuation <mode>', 'count punctuation in the scores, or ignore it (words the head table calls punctuation, or attached as punct)').choices(['count', 'ignore']).default('count'))
     .option('--json', 'print the report as JSON')
     .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser(wholeNumber(0)))
-    .option('--fail-above <limits...>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); kinds: ' + lossKinds.join(', '))
+    .option('--fail-above <limit>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); repeat it for several kinds; kinds: ' + lossKinds.join(', '), (value: string, previous: string[]) => [...previous, value], [])
     .option('--report <file>', 'also write an HTML page drawing the sentences with losses, original and back side by side')
     .addOption(new Option('--report-limit <n>', 'sentences drawn per kind of loss in the HTML page').default(20).argParser(wholeNumber(1)))
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
+  addListingOptions(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await roundtrip(files, options, io)));
 }
 
@@ -48,7 +49,10 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     if (!(error instanceof TableError)) throw error;
     return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
   }
-  const problems = new ProblemPrinter(io);
+  const problems = new ProblemPrinter(io, listingOf(options));
+  let read = 0;
+  let leftOut = 0;
+  let unit = 'tree';
   let report: RoundTripReport;
   let samples: RoundTripSample[] = [];
   const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
@@ -61,9 +65,13 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       number++;
+      read++;
       const wordless = trip.wordless;
       trip.add(tree.discontinuous ? insertTraces(tree).tree : tree, tree.id ?? `${tree.file}-${number}`);
-      if (trip.wordless > wordless) reportWordlessTree(tree, problems.report);
+      if (trip.wordless > wordless) {
+        leftOut++;
+        reportWordlessTree(tree, problems.report);
+      }
     }
     report = trip.report();
     samples = trip.samples;
@@ -72,10 +80,15 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
     const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
+    unit = 'sentence';
     for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
       number++;
+      read++;
       const problem = trip.add(sentence, sentence.id ?? `${sentence.file}-${number}`);
-      if (problem) problems.report(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? number}: ${problem}; left out`, sentence));
+      if (problem) {
+        leftOut++;
+        problems.report(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? number}: ${problem}; left out`, sentence));
+      }
     }
     report = trip.report();
     samples = trip.samples;
@@ -98,6 +111,8 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
       throw error;
     }
   }
+  problems.printSummary();
+  io.stderr.write(closingLine(read, unit, [[read - leftOut, 'round-tripped'], [leftOut, 'left out']], typeof options.report === 'string' ? [`report written to ${options.report}`] : [], problems));
   const exceeded = Object.entries(limits).filter(([kind, limit]) => share(report, kind as LossKind) > limit!);
   for (const [kind, limit] of exceeded) io.stderr.write(`treebridge: ${kind} losses ${share(report, kind as LossKind).toFixed(2)}% exceed ${limit}%\n`);
   return { code: exceeded.length > 0 || problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
@@ -127,7 +142,7 @@ function jsonOf(report: RoundTripReport) {
 
 function formatReport(report: RoundTripReport): string {
   const percent = (v: number) => `${(100 * v).toFixed(2)}%`;
-  const lines = [`${report.direction === 'brackets' ? 'brackets → dependencies → brackets' : 'dependencies → brackets → dependencies'}: ${report.sentences} sentences, ${report.exactMatch} come back exactly`];
+  const lines = [`${report.direction === 'brackets' ? 'brackets → dependencies → brackets' : 'dependencies → brackets → dependencies'}: ${plural(report.sentences, 'sentence')}, ${report.exactMatch.toLocaleString('en-US')} come back exactly`];
   if (report.brackets) {
     const b = report.brackets;
     lines.push(`brackets: precision ${percent(b.precision)}, recall ${percent(b.recall)}, F1 ${percent(b.f1)}, labelled F1 ${percent(b.labelledF1)}, crossing ${b.crossing}`);
@@ -137,7 +152,7 @@ function formatReport(report: RoundTripReport): string {
   lines.push('', `${'loss'.padEnd(14)} ${'count'.padStart(8)} ${'per 100'.padStart(8)}  examples`);
   for (const kind of lossKinds) {
     const count = report.losses[kind];
-    lines.push(`${kind.padEnd(14)} ${String(count).padStart(8)} ${share(report, kind).toFixed(2).padStart(8)}  ${report.examples[kind].join(' ')}`);
+    lines.push(`${kind.padEnd(14)} ${count.toLocaleString('en-US').padStart(8)} ${share(report, kind).toFixed(2).padStart(8)}  ${report.examples[kind].join(' ')}`);
   }
   lines.push(`(per 100 ${report.direction === 'brackets' ? 'gold brackets' : 'words'}; unary, nesting and punctuation take each lost or added bracket once)`);
   return lines.join('\n') + '\n';

@@ -4,8 +4,8 @@ import { formatCorpusStructure } from '../../analysis/format-structure.js';
 import { treeHeads } from '../../analysis/heads.js';
 import { checkHeads } from '../../validate/check-dependency-tree.js';
 import { analyseTree } from '../../analysis/structure.js';
-import { diagnoseItem, type Diagnostic } from '../../diagnostics/diagnostic.js';
-import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
+import { diagnoseItem } from '../../diagnostics/diagnostic.js';
+import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { openInputs, Output, type CliIO, type Input } from '../io.js';
@@ -27,6 +27,7 @@ export function registerStats(program: Command, io: CliIO, done: (result: Comman
     .option('--arcs', 'list each sentence with non-projective arcs, with the gap of each arc')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
+  addListingOptions(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await stats(files, options, io)));
 }
 
@@ -38,6 +39,7 @@ async function* sentencesOf(
   settings: ConversionSettings | undefined,
   report: Report,
   io: CliIO,
+  onWordless: () => void,
 ): AsyncGenerator<DependencySentence> {
   if (format === 'conllu') {
     yield* readSentencesOf(inputs, report, io);
@@ -49,7 +51,10 @@ async function* sentencesOf(
     const id = tree.id ?? `${tree.file}-${number}`;
     const conversion = convertTree(tree, settings!, id, id);
     if (conversion) yield conversion.sentence;
-    else reportWordlessTree(tree, report);
+    else {
+      onWordless();
+      reportWordlessTree(tree, report);
+    }
   }
 }
 
@@ -66,21 +71,21 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   }
   const output = Output.to(options.output as string | undefined, io);
   const counter = new CorpusStructureCounter();
-  let errors = 0;
+  const problems = new ProblemPrinter(io, listingOf(options));
+  const problem = problems.report;
   let skipped = 0;
-  const problem = (diagnostic: Diagnostic) => {
-    if (diagnostic.severity === 'error') errors++;
-    io.stderr.write(formatDiagnostic(diagnostic) + '\n');
-  };
+  let read = 0;
+  let wordless = 0;
   try {
-    for await (const sentence of sentencesOf(format, inputs, options, settings, problem, io)) {
+    for await (const sentence of sentencesOf(format, inputs, options, settings, problem, io, () => wordless++)) {
+      read++;
       // Only a tree can be measured: a sentence that is not one is reported and left out. Other
       // problems (a # text that does not match, an unknown relation) are validate's business.
-      const before = errors;
+      const before = problems.errors;
       checkHeads(sentence, problem);
       const checked = treeHeads(sentence);
       if ('problem' in checked) {
-        if (errors === before) problem(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? '(no id)'}: ${checked.problem}; left out`, sentence));
+        if (problems.errors === before) problem(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? '(no id)'}: ${checked.problem}; left out`, sentence));
         skipped++;
         continue;
       }
@@ -98,7 +103,11 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
     await output.abandon();
     throw error;
   }
-  if (skipped > 0) io.stderr.write(`treebridge: ${skipped} sentence${skipped === 1 ? '' : 's'} left out: not trees (see above)\n`);
+  problems.printSummary();
+  const unit = format === 'conllu' ? 'sentence' : 'tree';
+  const outcomes: Array<[number, string]> = [[read - skipped, 'measured'], [skipped, 'left out (not trees)']];
+  if (wordless > 0) outcomes.push([wordless, 'without words skipped']);
+  io.stderr.write(closingLine(read + wordless, unit, outcomes, [], problems));
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  return { code: errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+  return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

@@ -8,13 +8,13 @@ import { buildBrackets, type BracketSettings } from '../../reverse/build-bracket
 import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../../reverse/decode-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
-import { ProblemPrinter, tableErrorLines } from '../print-problems.js';
+import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf } from '../read-trees.js';
 
 export function registerToBrackets(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
-  program
+  const command = program
     .command('to-brackets')
     .description('rebuild constituency trees from dependency trees in CoNLL-U: as bracketings, where arcs that cannot be projective are lifted and marked with *ICH* traces, or as XML graphs, where non-projective subtrees become discontinuous phrases')
     .argument('<files...>', 'CoNLL-U files, or - for standard input')
@@ -25,8 +25,9 @@ export function registerToBrackets(program: Command, io: CliIO, done: (result: C
     .addOption(new Option('--to <format>', 'bracketed, or xml: the XML graph encoding, nothing lifted (default: by the output file\'s extension, .xml; else bracketed)').choices(['bracketed', 'xml']))
     .option('--lifts', 'report each sentence with lifted arcs on standard error')
     .option('--lossless', 'rebuild the bracketing carried by to-deps --lossless exactly, where a sentence carries one')
-    .option('-o, --output <file>', 'write the bracketed trees to a file (default: standard output)')
-    .action(async (files: string[], options: Record<string, unknown>) => done(await toBrackets(files, options, io)));
+    .option('-o, --output <file>', 'write the bracketed trees to a file (default: standard output)');
+  addListingOptions(command);
+  command.action(async (files: string[], options: Record<string, unknown>) => done(await toBrackets(files, options, io)));
 }
 
 async function toBrackets(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
@@ -44,7 +45,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   }
   const { inputs, failures } = await openInputs(files, io);
   const output = Output.to(options.output as string | undefined, io);
-  const problems = new ProblemPrinter(io);
+  const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), options.layout as Layout, report);
   let read = 0;
@@ -91,10 +92,10 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
     await output.abandon();
     throw error;
   }
-  const shape = settings.discontinuous
-    ? `${discontinuous} discontinuous phrase${discontinuous === 1 ? '' : 's'}`
-    : `${lifted} arc${lifted === 1 ? '' : 's'} lifted in ${liftedSentences} sentence${liftedSentences === 1 ? '' : 's'}`;
-  io.stderr.write(`treebridge: ${read} sentence${read === 1 ? '' : 's'} read: ${written} written, ${read - written} skipped; ${shape}${restored > 0 ? `; ${restored} tree${restored === 1 ? '' : 's'} without words restored from comments` : ''}\n`);
+  const shape = settings.discontinuous ? plural(discontinuous, 'discontinuous phrase') : `${plural(lifted, 'arc')} lifted in ${plural(liftedSentences, 'sentence')}`;
+  problems.printSummary();
+  const notes = [shape, restored > 0 ? `${plural(restored, 'tree')} without words restored from comments` : ''];
+  io.stderr.write(closingLine(read, 'sentence', [[written, 'written'], [read - written, 'skipped']], notes, problems));
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

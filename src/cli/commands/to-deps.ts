@@ -9,7 +9,7 @@ import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
-import { ProblemPrinter } from '../print-problems.js';
+import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { openInputs, Output, type CliIO } from '../io.js';
 import { readTreesOf } from '../read-trees.js';
@@ -22,6 +22,7 @@ export function registerToDeps(program: Command, io: CliIO, done: (result: Comma
     .option('-o, --output <file>', 'write the CoNLL-U to a file (default: standard output)');
   addConversionOptions(command);
   addTreeFormatOption(command);
+  addListingOptions(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await toDeps(files, options, io)));
 }
 
@@ -30,7 +31,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
   const { inputs, failures } = await openInputs(files, io);
   const output = Output.to(options.output as string | undefined, io);
-  const problems = new ProblemPrinter(io);
+  const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   let read = 0;
   let converted = 0;
@@ -79,8 +80,11 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
     await output.abandon();
     throw error;
   }
-  const notRead = problems.errors > 0 ? `; ${problems.errors} problem${problems.errors === 1 ? '' : 's'} kept trees from being read (above)` : '';
-  io.stderr.write(`treebridge: ${read} tree${read === 1 ? '' : 's'} read: ${converted} converted, ${carried > 0 ? `${carried} without words carried in comments, ` : ''}${skipped} skipped${notRead}\n`);
+  problems.printSummary();
+  const outcomes: Array<[number, string]> = [[converted, 'converted']];
+  if (carried > 0) outcomes.push([carried, 'without words carried in comments']);
+  outcomes.push([skipped, 'skipped']);
+  io.stderr.write(closingLine(read, 'tree', outcomes, [], problems));
   if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

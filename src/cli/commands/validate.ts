@@ -9,6 +9,7 @@ import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { describeError, openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { plural } from '../print-problems.js';
 
 export function registerValidate(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -113,7 +114,6 @@ function readRelations(value: string, io: CliIO): string[] | string {
 }
 
 function summaryLine(summary: ConlluSummary | ValidationSummary): string {
-  const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
   const unit = 'sentences' in summary ? plural(summary.sentences, 'sentence') : plural(summary.trees, 'tree');
   return `${plural(summary.files, 'file')}, ${unit}, ${plural(summary.words, 'word')}: ${plural(summary.errors, 'error')}, ${plural(summary.warnings, 'warning')}`;
 }

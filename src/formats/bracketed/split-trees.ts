@@ -97,6 +97,15 @@ export class TreeSplitter {
   /** Trees finished since the last batch left. */
   private finished: TreeChunk[] = [];
   private first = true;
+  /**
+   * Text received but not yet appended to the buffer. While a long tree is
+   * open, pieces wait here until they are as long as the open tree: appending
+   * a small piece to a long buffer copies the whole buffer (the engine flattens
+   * it to scan it), so a tree of n characters would cost n² copying; waiting
+   * for the text to double makes it linear.
+   */
+  private pending: string[] = [];
+  private pendingLength = 0;
   private readonly treeBreaks: TreeBreaks;
   private readonly maxTreeLength: number;
   private readonly maxDepth: number;
@@ -114,7 +123,7 @@ export class TreeSplitter {
 
   /** Characters held right now: one open tree and part of a line at most, whatever the input's size. */
   get buffered(): number {
-    return this.buffer.length;
+    return this.buffer.length + this.pendingLength;
   }
 
   /** Feeds the next piece of decoded text. */
@@ -123,7 +132,11 @@ export class TreeSplitter {
       this.first = false;
       if (piece.charCodeAt(0) === 0xfeff) piece = piece.slice(1);
     }
-    this.buffer += piece;
+    this.pending.push(piece);
+    this.pendingLength += piece.length;
+    const open = this.treeStart === -1 ? this.buffer.length - this.scan : this.buffer.length - this.treeStart;
+    if (this.pendingLength < open) return;
+    this.takePending();
     this.run(false);
     this.handOver();
     this.compact();
@@ -138,8 +151,16 @@ export class TreeSplitter {
     this.tokens.clearFinished();
   }
 
+  private takePending(): void {
+    if (this.pendingLength === 0) return;
+    this.buffer += this.pending.length === 1 ? this.pending[0]! : this.pending.join('');
+    this.pending = [];
+    this.pendingLength = 0;
+  }
+
   /** Ends the input: an open tree is reported as unclosed. */
   end(): void {
+    this.takePending();
     this.run(true);
     this.handOver();
     if (this.treeStart !== -1 || this.skipping) {

@@ -6,6 +6,7 @@ import { LineIndex } from '../../model/line-index.js';
 import { decodeStream, PIECE_SIZE } from '../bracketed/read-bracketed.js';
 import type { SourceLine } from './conllu-line.js';
 import { buildSentence } from './build-sentence.js';
+import { MAX_TREE_LENGTH } from '../../model/limits.js';
 
 /** How the CoNLL-U reader reports and names things. */
 export interface ConlluReadOptions {
@@ -49,7 +50,13 @@ export function readConlluText(text: string, options: ConlluReadOptions, report:
 }
 
 class LineReader {
-  private rest = '';
+  /** The start of a line whose end has not arrived, in pieces (joined once the line ends, so a long line costs no more than its length). */
+  private rest: string[] = [];
+  private restLength = 0;
+  /** The line being read is past the limit: it is reported once and its text dropped until its end. */
+  private overlong = false;
+  /** The sentence being read holds bytes that were not UTF-8: it is reported and not handed on. */
+  private broken = false;
   private offset = 0;
   private line = 1;
   private first = true;
@@ -71,19 +78,58 @@ class LineReader {
         this.offset = 0;
       }
     }
-    const text = this.rest + piece;
     let from = 0;
-    for (let end = text.indexOf('\n'); end !== -1; end = text.indexOf('\n', from)) {
-      this.take1(text.slice(from, end));
+    for (let end = piece.indexOf('\n'); end !== -1; end = piece.indexOf('\n', from)) {
+      const head = piece.slice(from, end);
+      if (this.overlong) {
+        this.skipOverlong(head.length);
+      } else if (this.restLength === 0) {
+        this.take1(head);
+      } else {
+        this.rest.push(head);
+        const line = this.rest.join('');
+        this.rest = [];
+        this.restLength = 0;
+        this.take1(line);
+      }
       from = end + 1;
     }
-    this.rest = text.slice(from);
+    if (from < piece.length) {
+      const tail = from === 0 ? piece : piece.slice(from);
+      if (this.overlong) {
+        this.offset += tail.length;
+      } else {
+        this.rest.push(tail);
+        this.restLength += tail.length;
+        if (this.restLength > MAX_TREE_LENGTH) this.startOverlong();
+      }
+    }
+  }
+
+  /** A line longer than any sentence may be: reported at its start, and dropped with its sentence. */
+  private startOverlong(): void {
+    const start: SourceLine = { text: this.rest[0]!.slice(0, 200), offset: this.offset, line: this.line };
+    this.problem('tree-too-large', start, 1, `line longer than ${MAX_TREE_LENGTH} characters; its sentence is skipped`);
+    this.offset += this.restLength;
+    this.rest = [];
+    this.restLength = 0;
+    this.overlong = true;
+    this.broken = true;
+  }
+
+  private skipOverlong(length: number): void {
+    this.offset += length + 1;
+    this.line++;
+    this.overlong = false;
   }
 
   end(): void {
-    if (this.rest.length > 0) {
-      const last = this.rest;
-      this.rest = '';
+    if (this.overlong) {
+      this.overlong = false;
+    } else if (this.restLength > 0) {
+      const last = this.rest.join('');
+      this.rest = [];
+      this.restLength = 0;
       this.problem('no-final-newline', { text: last, offset: this.offset, line: this.line }, last.length + 1, 'the file does not end with a line feed');
       this.take1(last);
     }
@@ -105,8 +151,16 @@ class LineReader {
     this.offset += text.length + 1;
     this.line++;
     if (text.endsWith('\r')) this.problem('carriage-return', line, text.length, 'line ends in CR LF; CoNLL-U lines end in LF');
+    const replaced = text.indexOf('\uFFFD');
+    if (replaced !== -1 && !this.broken) {
+      this.problem('invalid-encoding', line, replaced + 1, 'bytes that are not valid UTF-8 (shown as U+FFFD); the sentence is skipped');
+      this.broken = true;
+    }
     if (text === '' || text === '\r') {
-      if (this.lines.length === 0) {
+      if (this.lines.length === 0 && this.broken) {
+        // The sentence was all one overlong line, reported already: it ends here.
+        this.broken = false;
+      } else if (this.lines.length === 0) {
         if (this.afterBlank || line.line === 1) this.problem('extra-blank-line', line, 1, 'a blank line where a sentence should begin');
       } else {
         this.finish();
@@ -121,6 +175,10 @@ class LineReader {
   private finish(): void {
     const lines = this.lines;
     this.lines = [];
+    if (this.broken) {
+      this.broken = false;
+      return;
+    }
     const sentence = buildSentence(lines, this.file, this.report);
     if (sentence) this.ready.push(sentence);
   }

@@ -265,8 +265,15 @@ export class XmlGraphScanner {
     }
     sentence.end = end;
     sentence.lines = this.linesFor(sentence.start, end);
-    this.sentences.push(sentence);
     this.sentence = undefined;
+    // The decoder stands U+FFFD where bytes were not UTF-8: such a sentence is reported and skipped, as in the other formats.
+    const replaced = sentence.lines.text.indexOf('\uFFFD');
+    if (replaced !== -1) {
+      const offset = sentence.lines.start.offset + replaced;
+      this.report(diagnose('invalid-encoding', `sentence ${sentence.attributes.get('id') ?? '(no id)'}: bytes that are not valid UTF-8 (shown as U+FFFD); the sentence is skipped`, { file: this.file, offset, lines: sentence.lines }));
+      return;
+    }
+    this.sentences.push(sentence);
   }
 
   /** Offset of the `<` of the tag just read. */
