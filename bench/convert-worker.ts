@@ -10,7 +10,7 @@ import { writeSentence } from '../src/formats/conllu/write-conllu.js';
 import { loadHeadTable } from '../src/tables/load-table.js';
 
 const [heads, ...files] = process.argv.slice(2);
-const settings: ConversionSettings = { heads: loadHeadTable(heads!), traces: 'surface', coordination: 'first', punctuation: 'phrase' };
+const settings: ConversionSettings = { heads: loadHeadTable(heads!), traces: 'keep', coordination: 'first', punctuation: 'phrase' };
 const out = openSync(devNull, 'w');
 let trees = 0;
 let words = 0;

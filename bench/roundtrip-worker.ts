@@ -7,7 +7,7 @@ import { loadHeadTable } from '../src/tables/load-table.js';
 
 const [heads, ...files] = process.argv.slice(2);
 const trip = new BracketRoundTrip(
-  { heads: loadHeadTable(heads!), traces: 'surface', coordination: 'first', punctuation: 'phrase' },
+  { heads: loadHeadTable(heads!), traces: 'keep', coordination: 'first', punctuation: 'phrase' },
   { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
 );
 let trees = 0;

@@ -13,7 +13,7 @@ const names = readdirSync(join(corpora, 'gum/const')).filter((n) => n.endsWith('
 const settings = {
   heads: loadHeadTable(process.argv[2] ?? 'en-content'),
   labels: process.argv[3] ? loadLabelTable(process.argv[3]) : undefined,
-  traces: 'surface' as const,
+  traces: 'keep' as const,
   coordination: 'first' as const,
   punctuation: 'phrase' as const,
 };

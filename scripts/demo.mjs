@@ -53,7 +53,7 @@ const steps = [
   },
   {
     say: 'Restoring traces puts the extraposed and topicalised phrases where their traces stand: some arcs now cross.',
-    args: ['stats', '--arcs', '--heads', 'en-content', '--traces', 'restore', 'demo-data/harbour.psd'],
+    args: ['stats', '--arcs', '--heads', 'en-content', '--traces', 'resolve', 'demo-data/harbour.psd'],
     expect: 0,
   },
   {

@@ -1,10 +1,11 @@
 #!/usr/bin/env -S node --min-semi-space-size=16
 import { runCli } from '../cli/run-cli.js';
 
-// A reader that closes the pipe early (`| head`) is not an error: stop quietly.
+// A reader that closes the pipe early (`| head`) is not an error of ours: what is written after it
+// is dropped (the command's Output does so), and the command runs on to its exit code.
 for (const stream of [process.stdout, process.stderr]) {
   stream.on('error', (error: NodeJS.ErrnoException) => {
-    if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    if (error.code === 'EPIPE') return;
     throw error;
   });
 }

@@ -33,3 +33,20 @@ export function bracketedReadOptions(options: Record<string, unknown>): TreeRead
   }
   return read;
 }
+
+/** Options that only bracketed or XML input uses, by their names in the parsed options. */
+export const treeReadingOptions = ['lemmas', 'dropMeta', 'treeBreaks', 'literalTags'];
+/** Options that only a conversion of constituency trees uses. */
+export const conversionOptionNames = ['heads', 'labels', 'traces', 'coordination', 'punctuation', 'posMap', 'lossless'];
+
+/**
+ * A message refusing options the user gave that this run would ignore (the
+ * reason says why), or undefined. Defaults are not counted: only options
+ * written on the command line.
+ */
+export function refuseIgnored(command: Command, names: string[], why: string): string | undefined {
+  const given = names.filter((name) => command.getOptionValueSource(name) === 'cli');
+  if (given.length === 0) return undefined;
+  const flags = given.map((name) => command.options.find((option) => option.attributeName() === name)?.long ?? name);
+  return `${flags.join(', ')} ${given.length === 1 ? 'does' : 'do'} nothing here: ${why}`;
+}

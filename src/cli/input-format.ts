@@ -8,11 +8,39 @@ export const inputFormats: readonly InputFormat[] = ['bracketed', 'conllu', 'xml
 /** The formats that hold constituency trees. */
 export type TreeFormat = Exclude<InputFormat, 'conllu'>;
 
-/** The format of an input: `--from` when given, else by extension (`.conllu`, `.conll`; `.xml`), else bracketed. */
-export function formatOf(input: Input, from: InputFormat | undefined): InputFormat {
+/** Extensions that name a format. */
+const CONLLU_NAME = /\.conllu?$/i;
+const XML_NAME = /\.xml$/i;
+const BRACKETED_NAME = /\.(psd|ptb|mrg|tree|trees|penn|brackets?)$/i;
+
+/**
+ * The format of an input: `--from` when given, else by extension (`.conllu`,
+ * `.conll`; `.xml`; `.psd`, `.ptb`, `.mrg` …), else by what its first
+ * characters look like, else bracketed.
+ */
+export function formatOf(input: Input, from: InputFormat | undefined, fallback: InputFormat = 'bracketed'): InputFormat {
   if (from) return from;
-  if (/\.conllu?$/i.test(input.name)) return 'conllu';
-  return /\.xml$/i.test(input.name) ? 'xml' : 'bracketed';
+  if (CONLLU_NAME.test(input.name)) return 'conllu';
+  if (XML_NAME.test(input.name)) return 'xml';
+  if (BRACKETED_NAME.test(input.name)) return 'bracketed';
+  return input.sniffed ?? fallback;
+}
+
+/**
+ * A guess at a format from the first characters of a file: `<` opens XML, a
+ * bracket opens a bracketing, and comment lines or ten tab-separated columns
+ * are CoNLL-U. Undefined when nothing tells (an empty file, plain text).
+ */
+export function sniffFormat(text: string): InputFormat | undefined {
+  const start = text.replace(/^\uFEFF/, '').trimStart();
+  if (start === '') return undefined;
+  if (start.startsWith('<')) return 'xml';
+  if (start.startsWith('(')) return 'bracketed';
+  for (const line of start.split('\n').slice(0, 50)) {
+    if (line.startsWith('#') || line.trim() === '') continue;
+    return line.split('\t').length >= 9 ? 'conllu' : undefined;
+  }
+  return start.startsWith('#') ? 'conllu' : undefined;
 }
 
 /** The one format of all inputs, or a message when they mix formats. */

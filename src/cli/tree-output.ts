@@ -1,4 +1,4 @@
-import { diagnose, diagnoseItem, type Report } from '../diagnostics/diagnostic.js';
+import { diagnose, diagnoseItem, itemName, type Report } from '../diagnostics/diagnostic.js';
 import { unwritableReason, writeTree, type Layout } from '../formats/bracketed/write-bracketed.js';
 import { writeXmlSentence, xmlDocumentEnd, xmlDocumentStart } from '../formats/xml-graph/write-xml-graph.js';
 import { insertTraces } from '../reverse/insert-traces.js';
@@ -42,7 +42,7 @@ export class TreeSink {
       // A label or word a bracketing cannot hold would read back as other words: the tree is reported instead.
       const reason = unwritableReason(mended.tree);
       if (reason) {
-        this.report(diagnoseItem('unwritable-tree', `tree ${tree.id ?? '(no id)'} cannot be written as a bracketing: ${reason}`, tree));
+        this.report(diagnoseItem('unwritable-tree', `tree ${itemName(tree)} cannot be written as a bracketing: ${reason}`, tree));
         return false;
       }
       this.tracesInserted += mended.traces;
@@ -56,7 +56,7 @@ export class TreeSink {
     } catch (error) {
       const lines = tree.source ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
       const reason = error instanceof Error ? error.message.split('\n')[0] : String(error);
-      this.report(diagnose('unwritable-tree', `tree ${tree.id ?? '(no id)'} cannot be written as XML: ${reason}`, { file: tree.file ?? '-', offset: tree.position?.start ?? 0, lines }));
+      this.report(diagnose('unwritable-tree', `tree ${itemName(tree)} cannot be written as XML: ${reason}`, { file: tree.file ?? '-', offset: tree.position?.start ?? 0, lines }));
       return false;
     }
     this.count++;
@@ -84,5 +84,5 @@ export function reportSecondaryEdges(tree: Tree, into: string, report: Report): 
   const lines = tree.source ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
   const labels = [...new Set(edges.map((edge) => edge.label))].join(', ');
   const offset = edges[0]!.position?.start ?? tree.position?.start ?? 0;
-  report(diagnose('secondary-edges-dropped', `sentence ${tree.id ?? '(no id)'}: ${edges.length} secondary edge${edges.length === 1 ? '' : 's'} (${labels}) left out of the ${into}`, { file: tree.file ?? '-', offset, lines }));
+  report(diagnose('secondary-edges-dropped', `sentence ${itemName(tree)}: ${edges.length} secondary edge${edges.length === 1 ? '' : 's'} (${labels}) left out of the ${into}`, { file: tree.file ?? '-', offset, lines }));
 }

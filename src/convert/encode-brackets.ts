@@ -25,8 +25,8 @@ const escape = (text: string) => text.replace(/[%|,{}>= \t;]/g, (c) => `%${c.cha
 
 /** Encodes a tree's bracketing: a value per word (1-based), and the sentence-level comment. */
 export function encodeBrackets(tree: Tree, settings: ConversionSettings): { words: string[]; sentence: string } | undefined {
-  // Heads as in surface mode: every phrase is then headed by one of its own words.
-  const prepared = prepareTree(tree, 'surface');
+  // Heads with traces kept: every phrase is then headed by one of its own words.
+  const prepared = prepareTree(tree, 'keep');
   if (!prepared) return undefined;
   findHeads(prepared.root, settings.heads, settings.coordination);
   const headOfPhrase = new Map<Phrase, number>();

@@ -5,7 +5,7 @@ import { resolveTraces } from './resolve-traces.js';
 import { postOrder, rebuildBottomUp } from '../model/traverse.js';
 
 /** How traces are treated: where phrases stand, or where their traces stand. */
-export type TraceMode = 'surface' | 'restore';
+export type TraceMode = 'keep' | 'resolve';
 
 /**
  * Builds the tree the passes convert: words numbered in sentence order,
@@ -19,7 +19,7 @@ export type TraceMode = 'surface' | 'restore';
  * them in word order. Returns undefined for a tree without words.
  */
 export function prepareTree(tree: Tree, traces: TraceMode): { root: ConversionNode; words: WordNode[] } | undefined {
-  const source = traces === 'restore' ? resolveTraces(tree).tree : tree;
+  const source = traces === 'resolve' ? resolveTraces(tree).tree : tree;
   const words: WordNode[] = [];
   const top = build(source.children, words);
   if (top.length === 0) return undefined;

@@ -73,3 +73,15 @@ export function diagnoseItem(code: DiagnosticCode, message: string, item: Locate
   if (notes && notes.length > 0) diagnostic.notes = notes;
   return diagnostic;
 }
+
+/**
+ * How a tree or sentence is named wherever treebridge prints one: its
+ * identifier when it has one, else the file and line where it begins
+ * (`harbour.psd:12`), else its file and number among the items read.
+ */
+export function itemName(item: Located & { id?: string }, number?: number): string {
+  if (item.id !== undefined && item.id !== '') return item.id;
+  const file = item.file ?? '-';
+  if (item.source && item.position) return `${file}:${item.source.pointAt(item.position.start).line}`;
+  return number === undefined ? `${file} (no id)` : `${file}#${number}`;
+}

@@ -1,4 +1,4 @@
-import { diagnoseItem, type Report } from '../diagnostics/diagnostic.js';
+import { diagnoseItem, itemName, type Report } from '../diagnostics/diagnostic.js';
 import { reportWordlessTree } from '../convert/report-wordless-tree.js';
 import { prepareTree, type TraceMode } from '../convert/prepare-tree.js';
 import type { WordNode } from '../convert/conversion-tree.js';
@@ -66,11 +66,11 @@ export async function* pairWithGold(
         for (;;) {
           const more = await treeIterator.next();
           if (more.done) break;
-          if (prepareTree(more.value, 'surface')) left++;
+          if (prepareTree(more.value, 'keep')) left++;
           else tally.wordless++;
         }
         tally.treesWithoutGold += left;
-        report(diagnoseItem('unpaired', `the gold ran out: tree ${tree.id ?? '(no id)'} and ${left - 1} more tree${left - 1 === 1 ? '' : 's'} after it have no gold sentence; left out`, tree));
+        report(diagnoseItem('unpaired', `the gold ran out: tree ${itemName(tree)} and ${left - 1} more tree${left - 1 === 1 ? '' : 's'} after it have no gold sentence; left out`, tree));
         break;
       }
       const goldSentence = nextGold.value;
@@ -78,7 +78,7 @@ export async function* pairWithGold(
       const problem = alignmentProblem(prepared.words, goldSentence);
       if (problem) {
         tally.misaligned++;
-        report(diagnoseItem('misaligned', `tree ${tree.id ?? '(no id)'} and gold sentence ${goldSentence.id ?? '(no id)'} do not line up: ${problem}; left out`, tree));
+        report(diagnoseItem('misaligned', `tree ${itemName(tree)} and gold sentence ${itemName(goldSentence)} do not line up: ${problem}; left out`, tree));
         continue;
       }
       tally.paired++;
@@ -89,7 +89,7 @@ export async function* pairWithGold(
       let left = 1;
       while (!(await goldIterator.next()).done) left++;
       tally.goldWithoutTree += left;
-      report(diagnoseItem('unpaired', `the trees ran out: gold sentence ${extra.value.id ?? '(no id)'} and ${left - 1} more after it have no tree; left out`, extra.value));
+      report(diagnoseItem('unpaired', `the trees ran out: gold sentence ${itemName(extra.value)} and ${left - 1} more after it have no tree; left out`, extra.value));
     }
   } finally {
     await goldIterator.return?.();

@@ -286,7 +286,7 @@ export class DependencyRoundTrip {
     if ('problem' in checked) return checked.problem;
     this.sentences++;
     const rebuilt = buildBrackets(sentence, this.bracketing);
-    const back = rebuilt && convertTree(rebuilt.tree, { ...this.conversion, traces: 'restore' }, id, id);
+    const back = rebuilt && convertTree(rebuilt.tree, { ...this.conversion, traces: 'resolve' }, id, id);
     if (!back) {
       this.note('other', id);
       return;

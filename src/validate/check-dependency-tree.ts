@@ -108,7 +108,7 @@ function checkText(sentence: DependencySentence, report: Report): void {
   const prefix = comment.text.length - expected.length + 1; // "#" and " text = "
   const where = { file: sentence.file ?? '-', offset: comment.position.start + prefix + differ, lines: sentence.source };
   const shown = (text: string) => JSON.stringify(text.slice(Math.max(0, differ - 10), differ + 20));
-  report(diagnose('text-mismatch', `# text reads ${shown(expected)} where the words give ${shown(surface)}`, where));
+  report(diagnose('text-differs', `# text reads ${shown(expected)} where the words give ${shown(surface)}`, where));
 }
 
 function lineFields(word: DependencyWord): string[] {

@@ -51,7 +51,7 @@ export class ConlluValidator {
     this.summary.words += words.length;
     checkDependencyTree(sentence, this.report);
     for (const word of words) {
-      // A relation of the wrong shape is an error of its own (invalid-deprel).
+      // A relation of the wrong shape is an error of its own (relation-shape).
       if (!/^[a-z]+(:[a-z]+)?$/.test(word.deprel) || this.relations.has(word.deprel)) continue;
       const universal = word.deprel.split(':')[0]!;
       if (this.relations.has(universal)) continue;

@@ -15,7 +15,7 @@ const dir = mkdtempSync(join(tmpdir(), 'treebridge-heads-'));
 describe('treebridge heads score', () => {
   it('scores en-content against hand-written gold: most heads right, the extraposed clause only with traces restored', async () => {
     const surface = JSON.parse((await cli(['heads', 'score', '--json', '--heads', 'en-content', trees, '--gold', gold])).stdout);
-    const restored = JSON.parse((await cli(['heads', 'score', '--json', '--heads', 'en-content', '--traces', 'restore', trees, '--gold', gold])).stdout);
+    const restored = JSON.parse((await cli(['heads', 'score', '--json', '--heads', 'en-content', '--traces', 'resolve', trees, '--gold', gold])).stdout);
     expect(surface.sentences).toBe(8);
     expect(surface.uas).toBeGreaterThan(0.85);
     // "sail" hangs from "rumour" in the gold: restoring the *ICH* trace finds it, the surface cannot.

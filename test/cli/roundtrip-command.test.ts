@@ -23,7 +23,7 @@ describe('treebridge roundtrip', () => {
 
   it('puts every lost and every added bracket in exactly one kind', () => {
     const trip = new BracketRoundTrip(
-      { heads: loadHeadTable('en-content'), traces: 'surface', coordination: 'first', punctuation: 'phrase' },
+      { heads: loadHeadTable('en-content'), traces: 'keep', coordination: 'first', punctuation: 'phrase' },
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
     );
     read(readFileSync(demo, 'utf8')).trees.forEach((tree) => trip.add(tree, tree.id!));

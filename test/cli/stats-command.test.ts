@@ -35,7 +35,7 @@ describe('treebridge stats', () => {
   it('converts bracketed input first with --heads, and asks for a head table without it', async () => {
     const demo = join(projectRoot, 'demo-data/harbour.psd');
     const surface = JSON.parse((await cli(['stats', '--json', '--heads', 'en-content', demo])).stdout);
-    const restored = JSON.parse((await cli(['stats', '--json', '--heads', 'en-content', '--traces', 'restore', demo])).stdout);
+    const restored = JSON.parse((await cli(['stats', '--json', '--heads', 'en-content', '--traces', 'resolve', demo])).stdout);
     expect([surface.sentences, surface.words, surface.nonProjectiveSentences]).toEqual([25, 216, 0]);
     expect(restored.nonProjectiveSentences).toBeGreaterThan(0);
     const without = await cli(['stats', demo]);

@@ -28,10 +28,10 @@ describe('treebridge to-brackets', () => {
     expect(stderr).toBe('cross-1: lifted 7: 1→2\ntreebridge: 1 sentence read: 1 written, 0 skipped; 1 arc lifted in 1 sentence\n');
   });
 
-  it('gives the original arcs back through to-deps --heads ud --traces restore, in both shapes', async () => {
+  it('gives the original arcs back through to-deps --heads ud --traces resolve, in both shapes', async () => {
     for (const shape of ['flat', 'layered']) {
       const brackets = await cli(['to-brackets', '--shape', shape, '-'], { stdin: crossing });
-      const back = await cli(['to-deps', '--heads', 'ud', '--traces', 'restore', '-'], { stdin: brackets.stdout });
+      const back = await cli(['to-deps', '--heads', 'ud', '--traces', 'resolve', '-'], { stdin: brackets.stdout });
       const arcs = back.stdout.split('\n').filter((l) => /^\d/.test(l)).map((l) => l.split('\t').slice(6, 8).join(':'));
       expect(arcs, shape).toEqual(['2:nsubj', '0:root', '2:advmod', '7:obj', '6:det', '7:nsubj', '1:acl:relcl']);
     }

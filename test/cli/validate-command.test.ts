@@ -49,11 +49,11 @@ describe('treebridge validate', () => {
     ]);
   });
 
-  it('exits 2 with a one-line message for a file it cannot read, and still checks the others', async () => {
+  it('item 17: exits 2 with a one-line message for a file it cannot read, before checking anything', async () => {
     const { code, stdout, stderr } = await cli(['validate', 'no-such-file.psd', demo('harbour.psd')]);
     expect(code).toBe(2);
     expect(stderr).toBe('treebridge: cannot read "no-such-file.psd": no such file\n');
-    expect(stdout).toContain('25 trees');
+    expect(stdout).toBe('');
   });
 
   it('exits 2 on an unknown option or a missing argument', async () => {
@@ -80,7 +80,7 @@ describe('treebridge validate', () => {
     const dir = mkdtempSync(join(tmpdir(), 'treebridge-'));
     const { code, stderr } = await cli(['validate', '-o', 'missing-folder/report.txt', demo('harbour.psd')], { cwd: dir });
     expect(code).toBe(2);
-    expect(stderr).toBe('treebridge: cannot write "missing-folder/report.txt": no such file\n');
+    expect(stderr).toBe('treebridge: cannot write "missing-folder/report.txt": the folder "missing-folder" does not exist\n');
     writeFileSync(join(dir, 'old.txt'), 'old');
     expect(readdirSync(dir)).toEqual(['old.txt']);
   });

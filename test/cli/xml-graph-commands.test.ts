@@ -11,7 +11,7 @@ const graphs = join(projectRoot, 'test/fixtures/xml-graph/ferry-graphs.xml');
 const arcs = (conllu: string) => conllu.split('\n').filter((l) => /^\d/.test(l)).map((l) => l.split('\t').slice(0, 8).join(' '));
 
 describe('the XML graph encoding on the command line', () => {
-  it('rewrite --traces resolve writes XML by the output extension, and to-deps reads it to the same dependencies as --traces restore', async () => {
+  it('rewrite --traces resolve writes XML by the output extension, and to-deps reads it to the same dependencies as --traces resolve', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'treebridge-xml-cli-'));
     const xml = join(dir, 'harbour.xml');
     const written = await cli(['rewrite', '--traces', 'resolve', '-o', xml, harbour]);
@@ -19,7 +19,7 @@ describe('the XML graph encoding on the command line', () => {
     expect(written.stderr).toBe('treebridge: 25 trees read: 25 written, 0 skipped; 12 antecedents moved to their traces\n');
     expect(readFileSync(xml, 'utf8')).toMatch(/^<\?xml version="1.0" encoding="UTF-8"\?>\n<corpus>/);
     const viaXml = await cli(['to-deps', '--heads', 'en-function', xml]);
-    const restored = await cli(['to-deps', '--heads', 'en-function', '--traces', 'restore', harbour]);
+    const restored = await cli(['to-deps', '--heads', 'en-function', '--traces', 'resolve', harbour]);
     expect(viaXml.code).toBe(0);
     expect(arcs(viaXml.stdout)).toEqual(arcs(restored.stdout));
     expect(arcs(viaXml.stdout).length).toBe(216);

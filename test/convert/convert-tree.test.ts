@@ -11,17 +11,17 @@ import { read } from '../support/read.js';
 
 const harbour = read(readFileSync(join(projectRoot, 'demo-data/harbour.psd'), 'utf8')).trees;
 const tree = (id: string) => harbour.find((t) => t.id === id)!;
-const settings = (traces: 'surface' | 'restore') => ({ heads: loadHeadTable('en-content'), traces, coordination: 'first' as const, punctuation: 'phrase' as const });
+const settings = (traces: 'keep' | 'resolve') => ({ heads: loadHeadTable('en-content'), traces, coordination: 'first' as const, punctuation: 'phrase' as const });
 
 describe('converting a tree', () => {
   it('makes words of the words only: empty elements never become words', () => {
-    const result = convertTree(tree('harbour.3'), settings('surface'), 'x', 'x')!;
+    const result = convertTree(tree('harbour.3'), settings('keep'), 'x', 'x')!;
     expect(result.sentence.lines.map((l) => l.form).join(' ')).toBe('The old crates , the keeper stacked by the wall .');
   });
 
   it('restores an extraposed clause to where its *ICH* trace stands, making its arc non-projective', () => {
-    const surface = convertTree(tree('harbour.4'), settings('surface'), 'x', 'x')!.sentence;
-    const restored = convertTree(tree('harbour.4'), settings('restore'), 'x', 'x')!.sentence;
+    const surface = convertTree(tree('harbour.4'), settings('keep'), 'x', 'x')!.sentence;
+    const restored = convertTree(tree('harbour.4'), settings('resolve'), 'x', 'x')!.sentence;
     const head = (s: typeof surface, form: string) => s.lines[Number(s.lines.find((l) => l.form === form)!.head) - 1]?.form;
     expect(head(surface, 'sail')).toBe('spread');
     expect(head(restored, 'sail')).toBe('rumour');
@@ -32,7 +32,7 @@ describe('converting a tree', () => {
   it('restores a topicalised object to its *T* trace in an embedded clause', () => {
     const text = '(S (NP-TPC-1 (DT The) (NNS nets)) (NP-SBJ (NNP Mira)) (VP (VBD said) (SBAR (S (NP-SBJ (PRP she)) (VP (VBD mended) (NP (-NONE- *T*-1)))))))';
     expect(arcs(text, 'en-content')).toContain('nets→said/tpc');
-    expect(arcs(text, 'en-content', { traces: 'restore' })).toContain('nets→mended/dep');
+    expect(arcs(text, 'en-content', { traces: 'resolve' })).toContain('nets→mended/dep');
   });
 
   it('drops a phrase whose only content is empty, and heads a phrase whose head child was empty from the rest', () => {

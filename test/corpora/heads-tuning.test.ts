@@ -56,7 +56,7 @@ describe('heads score', () => {
     async function* g() {
       for (const file of gold(trees)) yield* readConlluFile(file, {}, () => undefined);
     }
-    const direct = await scoreConversion(t(), g(), { heads: loadHeadTable('en-content'), labels: loadLabelTable('en-ud'), traces: 'surface', coordination: 'first', punctuation: 'phrase' }, () => undefined);
+    const direct = await scoreConversion(t(), g(), { heads: loadHeadTable('en-content'), labels: loadLabelTable('en-ud'), traces: 'keep', coordination: 'first', punctuation: 'phrase' }, () => undefined);
     const { stdout } = await cli(['heads', 'score', '--json', '--heads', 'en-content', '--labels', 'en-ud', ...trees, '--gold', ...gold(trees)]);
     const command = JSON.parse(stdout);
     expect([command.uas, command.las]).toEqual([Math.round(direct.scorer.uas * 1e4) / 1e4, Math.round(direct.scorer.las * 1e4) / 1e4]);

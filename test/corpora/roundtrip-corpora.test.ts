@@ -18,7 +18,7 @@ describe.each([
 ] as const)('round trip of %s', (name, folder, extension, heads, lemmas) => {
   it('changes no word and no tag, and puts every lost or added bracket in one kind', async () => {
     const trip = new BracketRoundTrip(
-      { heads: loadHeadTable(heads), traces: 'surface', coordination: 'first', punctuation: 'phrase', upos: loadPosMap(folder === 'gum/const' ? 'en-ptb' : 'penn-historical') },
+      { heads: loadHeadTable(heads), traces: 'keep', coordination: 'first', punctuation: 'phrase', upos: loadPosMap(folder === 'gum/const' ? 'en-ptb' : 'penn-historical') },
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
     );
     let n = 0;
@@ -41,7 +41,7 @@ describe.each([
 ] as const)('lossless round trip of %s', (name, folder, extension, heads, lemmas) => {
   it('gives back every tree exactly: function tags, empty elements and coindices included, trees without words in comments', async () => {
     const trip = new BracketRoundTrip(
-      { heads: loadHeadTable(heads), traces: 'surface', coordination: 'first', punctuation: 'phrase', lossless: true },
+      { heads: loadHeadTable(heads), traces: 'keep', coordination: 'first', punctuation: 'phrase', lossless: true },
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
     );
     let trees = 0;

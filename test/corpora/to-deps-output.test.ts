@@ -12,7 +12,7 @@ import { corpusFiles, nltkHeads } from '../support/corpora.js';
 
 describe.each([
   ['GUM with en-content and en-ud', 'gum/const', '.ptb', ['--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb']],
-  ['IcePaHC with penn-historical, traces restored', 'icepahc', '.psd', ['--heads', 'penn-historical', '--traces', 'restore', '--lemmas']],
+  ['IcePaHC with penn-historical, traces restored', 'icepahc', '.psd', ['--heads', 'penn-historical', '--traces', 'resolve', '--lemmas']],
 ])('to-deps on %s', (_name, folder, extension, options) => {
   it('writes CoNLL-U that validates and that NLTK reads with the same heads', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'treebridge-deps-'));

@@ -4,7 +4,7 @@
 //   root, every edge target exists, every terminal reached exactly once, no cycles.
 // - IcePaHC (CC BY 4.0): bracketed → traces resolved into discontinuous phrases →
 //   XML → read back → to-deps gives, tree for tree, the dependencies that
-//   `to-deps --traces restore` gives on the bracketing.
+//   `to-deps --traces resolve` gives on the bracketing.
 // - UD EWT and CAC dev (CC BY-SA 4.0) and GUM dep (CC BY 4.0): dependencies → XML
 //   (non-projective subtrees as discontinuous phrases) → `to-deps --heads ud` is
 //   exact for every sentence, and the number of discontinuous phrases equals the
@@ -63,7 +63,7 @@ describe('IcePaHC through the XML graph encoding', () => {
     const viaXml = join(dir, 'via-xml.conllu');
     const restored = join(dir, 'restored.conllu');
     expect((await cli(['to-deps', '--heads', 'penn-historical', '-o', viaXml, xml])).code).toBe(0);
-    expect((await cli(['to-deps', '--lemmas', '--heads', 'penn-historical', '--traces', 'restore', '-o', restored, ...files])).code).toBe(0);
+    expect((await cli(['to-deps', '--lemmas', '--heads', 'penn-historical', '--traces', 'resolve', '-o', restored, ...files])).code).toBe(0);
     const a = arcs(readFileSync(viaXml, 'utf8'));
     const b = arcs(readFileSync(restored, 'utf8'));
     expect(a.length).toBe(b.length);
@@ -73,13 +73,13 @@ describe('IcePaHC through the XML graph encoding', () => {
     expect(a.length).toBe(36_555);
 
     // The opposite way: the discontinuous trees written as bracketings with *ICH* traces, read with
-    // --traces restore, give the same dependencies again.
+    // --traces resolve, give the same dependencies again.
     const bracketed = join(dir, 'back.psd');
     const rewritten = await cli(['rewrite', '-o', bracketed, xml]);
     expect(rewritten.code).toBe(0);
     const inserted = Number(/([\d,]+) \*ICH\* traces? put in/.exec(rewritten.stderr)![1]!.replace(/,/g, ''));
     const viaTraces = join(dir, 'via-traces.conllu');
-    expect((await cli(['to-deps', '--lemmas', '--heads', 'penn-historical', '--traces', 'restore', '-o', viaTraces, bracketed])).code).toBe(0);
+    expect((await cli(['to-deps', '--lemmas', '--heads', 'penn-historical', '--traces', 'resolve', '-o', viaTraces, bracketed])).code).toBe(0);
     const c = arcs(readFileSync(viaTraces, 'utf8'));
     expect(c.length).toBe(b.length);
     // A trace left behind because its antecedent had moved to an earlier trace is not stable: in the

@@ -34,7 +34,7 @@ describe('item 1: heads that do not form a tree never make a command loop', () =
         const run = await runBin([...command, path]);
         expect(run.timedOut).toBe(false);
         expect(run.code).toBe(1);
-        expect(run.stderr).toMatch(/error: .*\[(not-a-tree|cycle|invalid-head|several-root-words|no-root)\]/);
+        expect(run.stderr).toMatch(/error: .*\[(not-a-tree|cycle|head-not-word|several-root-words|no-root)\]/);
         if (command[0] === 'to-brackets') expect(run.stderr).toMatch(/2 sentences read: 1 written, 1 skipped/);
         if (command[0] === 'stats') expect(run.stdout).toMatch(/sentences\s+1\n/);
       });
@@ -48,7 +48,7 @@ describe('item 2: stats on HEAD -1', () => {
     const run = await runBin(['stats', path]);
     expect(run.code).toBe(1);
     expect(run.stderr).not.toMatch(/Cannot read properties/);
-    expect(run.stderr).toMatch(/\[invalid-head\]/);
+    expect(run.stderr).toMatch(/\[head-not-word\]/);
     expect(run.stdout).toMatch(/sentences\s+1\n/);
   });
 });
@@ -107,6 +107,6 @@ describe('item 3: no stack overflow at the documented depth limit (2,000)', () =
   it('reads back a bracketing built from the deepest chain that fits', async () => {
     const built = await runBin(['to-brackets', fittingChain]);
     const back = await runBin(['validate', '--from', 'bracketed', '-'], { stdin: built.stdout });
-    expect(back.stdout).toMatch(/1 tree, 1998 words: 0 errors/);
+    expect(back.stdout).toMatch(/1 tree, 1,998 words: 0 errors/);
   });
 });

@@ -35,7 +35,7 @@ describe('drawings for the round-trip report', () => {
 
   it('makes one self-contained page: no outside stylesheet, script or image', () => {
     const trip = new BracketRoundTrip(
-      { heads: loadHeadTable('en-content'), traces: 'surface', coordination: 'first', punctuation: 'phrase' },
+      { heads: loadHeadTable('en-content'), traces: 'keep', coordination: 'first', punctuation: 'phrase' },
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
       5,
       2,
@@ -53,7 +53,7 @@ describe('drawings for the round-trip report', () => {
     const [sentence] = readConlluText(text, { file: 'b.conllu' }, () => undefined);
     const trip = new DependencyRoundTrip(
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'upos' },
-      { heads: loadHeadTable('generic'), traces: 'restore', coordination: 'first', punctuation: 'phrase' },
+      { heads: loadHeadTable('generic'), traces: 'resolve', coordination: 'first', punctuation: 'phrase' },
       5,
       3,
     );

@@ -60,7 +60,7 @@ describe('inserting *ICH* traces for discontinuous phrases', () => {
       expect(countDiscontinuousPhrases(built.tree), JSON.stringify(vector)).toBe(structure.gappedWords);
       // Written as a bracketing and read again, the *ICH* traces lead back to the same heads.
       const bracketed = read(writeTree(built.tree)).trees[0]!;
-      const back = convertTree(bracketed, { heads, traces: 'restore', coordination: 'table', punctuation: 'phrase' }, 'r', 'r')!;
+      const back = convertTree(bracketed, { heads, traces: 'resolve', coordination: 'table', punctuation: 'phrase' }, 'r', 'r')!;
       expect(back.sentence.lines.map((l) => Number(l.head)), JSON.stringify(vector)).toEqual(vector.slice(1));
     }
     expect(nonProjective).toBeGreaterThan(500);

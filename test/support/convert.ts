@@ -8,7 +8,7 @@ import { read } from './read.js';
 /** The head word's form of the top phrase of a one-tree string, by a head table (no coordination styling). */
 export function headOf(text: string, table: string): string {
   const tree = read(text).trees[0]!;
-  const prepared = prepareTree(tree, 'surface')!;
+  const prepared = prepareTree(tree, 'keep')!;
   findHeads(prepared.root, loadHeadTable(table));
   return headWordOf(prepared.root).form;
 }
@@ -19,7 +19,7 @@ export function arcs(text: string, heads: string, extra: Partial<ConversionSetti
   const settings: ConversionSettings = {
     heads: loadHeadTable(heads),
     labels: extra.labelTable ? loadLabelTable(extra.labelTable) : undefined,
-    traces: 'surface',
+    traces: 'keep',
     coordination: 'first',
     punctuation: 'phrase',
     ...extra,

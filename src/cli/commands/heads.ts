@@ -2,11 +2,13 @@ import { Option, type Command } from 'commander';
 import { headWordOf, type ConversionNode } from '../../convert/conversion-tree.js';
 import { findHeads } from '../../convert/find-heads.js';
 import { prepareTree } from '../../convert/prepare-tree.js';
-import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { itemName } from '../../diagnostics/diagnostic.js';
+import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { addListingOptions, listingOf, plural, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
-import { openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
+import type { InputFormat } from '../input-format.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { scoreConversion, type ConversionScore } from '../../evaluate/score-conversion.js';
 import { describePairing, emptyTally, pairingIncomplete, type PairingTally } from '../../evaluate/pair-with-gold.js';
@@ -26,6 +28,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('-o, --output <file>', 'write the explanation to a file (default: standard output)');
   addConversionOptions(explain);
   addListingOptions(explain);
+  addTreeFormatOption(explain);
   addBracketedReadOptions(explain).action(async (file: string, options: Record<string, unknown>) => done(await explainHeads(file, options, io)));
   const collect = (value: string, previous: string[]) => [...previous, value];
   const score = heads
@@ -33,13 +36,14 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .description('convert bracketed trees and score them against gold dependencies: UAS, LAS and where the head table goes wrong')
     .argument('<files...>', 'bracketed files, in the order of the gold sentences')
     .requiredOption('--gold <file>', 'a CoNLL-U file with gold dependencies of the same sentences, in order; repeat it for several files', collect, [])
-    .option('--with-punctuation', 'score punctuation too (left out by default)')
+    .addOption(new Option('--score-punctuation <mode>', 'count punctuation in the scores, or ignore it (words attached as punct or tagged PUNCT in the gold)').choices(['count', 'ignore']).default('ignore'))
     .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
     .option('--unscored <key=values>', 'gold words not to score, by a MISC key and its values: Align=absorbed,extra')
     .option('--json', 'print the scores as JSON')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(score);
   addListingOptions(score);
+  addTreeFormatOption(score);
   addBracketedReadOptions(score).action(async (files: string[], options: Record<string, unknown>) => done(await scoreHeads(files, options, io)));
   const suggest = heads
     .command('suggest')
@@ -53,8 +57,9 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .addOption(new Option('--min-phrases <n>', 'fewest phrases of a category to change its block').default(30).argParser(wholeNumber(1)))
     .addOption(new Option('--min-gain <share>', 'least gain, as a share of the phrases, to change a block').default(0.01).argParser(Number.parseFloat))
     .addOption(new Option('--coordination <style>', 'coordination style (its phrases are left out of learning)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
-    .addOption(new Option('--traces <mode>', 'where antecedents of traces attach').choices(['surface', 'restore']).default('surface'));
+    .addOption(new Option('--traces <mode>', 'keep: phrases attach where they stand; resolve: antecedents attach where their traces stand').choices(['keep', 'resolve']).default('keep'));
   addListingOptions(suggest);
+  addTreeFormatOption(suggest);
   addBracketedReadOptions(suggest).action(async (files: string[], options: Record<string, unknown>) => done(await suggestHeads(files, options, io)));
   for (const command of heads.commands) {
     command.exitOverride().configureOutput({ writeOut: (text) => io.stdout.write(text), writeErr: (text) => io.stderr.write(text) });
@@ -68,8 +73,9 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
   const wanted = options.sentence as number | undefined;
   if (wanted !== undefined && !(wanted >= 1)) return { code: ExitCode.UsageOrIO, messages: ['--sentence counts trees from 1'] };
   const { inputs, failures } = await openInputs([file], io);
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
-  const output = Output.to(options.output as string | undefined, io);
+  const wrong = checkInputs(inputs, failures, 'heads explain', ['bracketed', 'xml'], options.from as InputFormat | undefined, [options.output as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   let number = 0;
@@ -80,11 +86,11 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
       const prepared = prepareTree(tree, settings.traces);
       const where = tree.position && tree.source ? `${tree.file}:${tree.source.pointAt(tree.position.start).line}` : tree.file;
       if (!prepared) {
-        await output.write(`${tree.id ?? `tree ${number}`} (${where}): no words\n\n`);
+        await output.write(`${itemName(tree, number)} (${where}): no words\n\n`);
         continue;
       }
       findHeads(prepared.root, settings.heads, settings.coordination);
-      const lines: string[] = [`${tree.id ?? `tree ${number}`} (${where}), heads by ${settings.heads.name}`];
+      const lines: string[] = [`${itemName(tree, number)} (${where}), heads by ${settings.heads.name}`];
       const stack: Array<{ node: ConversionNode; depth: number }> = [{ node: prepared.root, depth: 0 }];
       while (stack.length > 0) {
         const { node, depth } = stack.pop()!;
@@ -113,11 +119,15 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
   if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
-  const failures = [...trees.failures, ...gold.failures];
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  const outputs = [options.output as string | undefined];
+  const wrong = [
+    ...checkInputs(trees.inputs, trees.failures, 'heads score', ['bracketed', 'xml'], options.from as InputFormat | undefined, outputs, io),
+    ...checkInputs(gold.inputs, gold.failures, 'heads score --gold', ['conllu'], undefined, outputs, io),
+  ];
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
   const unscored = unscoredTest(options.unscored);
   if (typeof unscored === 'string') return { code: ExitCode.UsageOrIO, messages: [unscored] };
-  const output = Output.to(options.output as string | undefined, io);
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const tally = emptyTally();
@@ -127,7 +137,7 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
       readSentencesOf(gold.inputs, report, io),
       settings,
       report,
-      options.withPunctuation === true,
+      options.scorePunctuation === 'count',
       tally,
       unscored,
     );
@@ -206,8 +216,12 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
-  const failures = [...trees.failures, ...gold.failures];
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  const outputs = [options.output as string | undefined];
+  const wrong = [
+    ...checkInputs(trees.inputs, trees.failures, 'heads suggest', ['bracketed', 'xml'], options.from as InputFormat | undefined, outputs, io),
+    ...checkInputs(gold.inputs, gold.failures, 'heads suggest --gold', ['conllu'], undefined, outputs, io),
+  ];
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const path = options.output as string;
@@ -225,7 +239,7 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
     minimumPhrases: options.minPhrases as number,
     minimumGain: options.minGain as number,
   });
-  const output = Output.to(path, io);
+  const output = Output.to(path, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   try {
     await output.write(writeSuggestedTable(name, written, collected.sentences, changed, kept, inline) + '\n');
     await output.commit();

@@ -4,7 +4,8 @@ import { resolveTraces } from '../../convert/resolve-traces.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
-import { openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
+import type { InputFormat } from '../input-format.js';
 import { readTreesOf } from '../read-trees.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 
@@ -26,7 +27,9 @@ export function registerRewrite(program: Command, io: CliIO, done: (result: Comm
 
 async function rewrite(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   const { inputs, failures } = await openInputs(files, io);
-  const output = Output.to(options.output as string | undefined, io);
+  const wrong = checkInputs(inputs, failures, 'rewrite', ['bracketed', 'xml'], options.from as InputFormat | undefined, [options.output as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const layout = options.layout as Layout;
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
@@ -60,6 +63,5 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
   ].filter(Boolean);
   problems.printSummary();
   io.stderr.write(closingLine(read, 'tree', [[written, 'written'], [read - written, 'skipped']], notes, problems));
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

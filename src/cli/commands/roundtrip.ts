@@ -1,15 +1,16 @@
+import { shippedTables } from '../../tables/table-source.js';
 import { Option, type Command } from 'commander';
 import { insertTraces } from '../../reverse/insert-traces.js';
 import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport, type RoundTripSample } from '../../evaluate/roundtrip.js';
 import { writeReport } from '../../report/write-report.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
-import { diagnoseItem } from '../../diagnostics/diagnostic.js';
-import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
+import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
-import { openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
@@ -21,7 +22,7 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .description('convert there and back and report what was lost: bracketed input goes to dependencies and back, CoNLL-U to brackets and back')
     .argument('<files...>', 'bracketed or CoNLL-U files, or - for standard input')
     .addOption(new Option('--from <format>', 'input format (default: by extension)').choices([...inputFormats]))
-    .option('--categories <table>', 'category table for the rebuilt bracketings', 'ud')
+    .option('--categories <table>', `category table for the rebuilt bracketings: a shipped one (${shippedTables('categories').join(', ')}) or a path`, 'ud')
     .addOption(new Option('--shape <shape>', 'shape of the rebuilt bracketings').choices(['flat', 'layered']).default('flat'))
     .addOption(new Option('--score-punctuation <mode>', 'count punctuation in the scores, or ignore it (words the head table calls punctuation, or attached as punct)').choices(['count', 'ignore']).default('count'))
     .option('--json', 'print the report as JSON')
@@ -32,16 +33,22 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
   addListingOptions(command);
-  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await roundtrip(files, options, io)));
+  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => done(await roundtrip(files, options, io, self)));
 }
 
-async function roundtrip(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+async function roundtrip(files: string[], options: Record<string, unknown>, io: CliIO, self: Command): Promise<CommandResult> {
   const limits = parseLimits(options.failAbove as string[] | undefined);
   if (typeof limits === 'string') return { code: ExitCode.UsageOrIO, messages: [limits] };
   const { inputs, failures } = await openInputs(files, io);
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
+  const wrong = checkInputs(inputs, failures, 'roundtrip', inputFormats, options.from as InputFormat | undefined, [options.output as string | undefined, options.report as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
   const format = commonFormat(inputs, options.from as InputFormat | undefined);
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  const ignored =
+    format === 'conllu'
+      ? refuseIgnored(self, [...treeReadingOptions, 'traces', 'coordination', 'punctuation', 'lossless', 'posMap'], 'CoNLL-U goes to brackets and back with traces resolved and the head table deciding coordination')
+      : undefined;
+  if (ignored) return { code: ExitCode.UsageOrIO, messages: [ignored] };
   let categories;
   try {
     categories = loadCategoryTable(options.categories as string);
@@ -59,7 +66,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   if (format !== 'conllu') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['constituency trees (bracketed or XML graphs) need a head table to go to dependencies: --heads NAME'] };
     // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces, whose restored reading it is.
-    const settings = conversionSettings(format === 'xml' ? { ...options, traces: 'restore' } : options);
+    const settings = conversionSettings(format === 'xml' ? { ...options, traces: 'resolve' } : options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
     const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
@@ -67,7 +74,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
       number++;
       read++;
       const wordless = trip.wordless;
-      trip.add(tree.discontinuous ? insertTraces(tree).tree : tree, tree.id ?? `${tree.file}-${number}`);
+      trip.add(tree.discontinuous ? insertTraces(tree).tree : tree, itemName(tree, number));
       if (trip.wordless > wordless) {
         leftOut++;
         reportWordlessTree(tree, problems.report);
@@ -76,7 +83,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     report = trip.report();
     samples = trip.samples;
   } else {
-    const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'restore', coordination: 'table' });
+    const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'resolve', coordination: 'table' });
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
     const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
     let number = 0;
@@ -84,16 +91,16 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
       number++;
       read++;
-      const problem = trip.add(sentence, sentence.id ?? `${sentence.file}-${number}`);
+      const problem = trip.add(sentence, itemName(sentence, number));
       if (problem) {
         leftOut++;
-        problems.report(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? number}: ${problem}; left out`, sentence));
+        problems.report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, number)}: ${problem}; left out`, sentence));
       }
     }
     report = trip.report();
     samples = trip.samples;
   }
-  const output = Output.to(options.output as string | undefined, io);
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   try {
     await output.write(options.json === true ? JSON.stringify(jsonOf(report), null, 2) + '\n' : formatReport(report));
     await output.commit();
@@ -102,7 +109,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     throw error;
   }
   if (typeof options.report === 'string') {
-    const page = Output.to(options.report, io);
+    const page = Output.to(options.report, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
     try {
       await page.write(writeReport(report, samples, options.reportLimit as number));
       await page.commit();

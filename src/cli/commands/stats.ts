@@ -4,13 +4,13 @@ import { formatCorpusStructure } from '../../analysis/format-structure.js';
 import { treeHeads } from '../../analysis/heads.js';
 import { checkHeads } from '../../validate/check-dependency-tree.js';
 import { analyseTree } from '../../analysis/structure.js';
-import { diagnoseItem } from '../../diagnostics/diagnostic.js';
+import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
-import { openInputs, Output, type CliIO, type Input } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO, type Input } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
-import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { addBracketedReadOptions, bracketedReadOptions, conversionOptionNames, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { convertTree, type ConversionSettings } from '../../convert/convert-tree.js';
 import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
@@ -28,7 +28,7 @@ export function registerStats(program: Command, io: CliIO, done: (result: Comman
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
   addListingOptions(command);
-  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await stats(files, options, io)));
+  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => done(await stats(files, options, io, self)));
 }
 
 /** Dependency sentences of the inputs: read as CoNLL-U, or converted from bracketed trees. */
@@ -58,10 +58,14 @@ async function* sentencesOf(
   }
 }
 
-async function stats(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+async function stats(files: string[], options: Record<string, unknown>, io: CliIO, self: Command): Promise<CommandResult> {
   const { inputs, failures } = await openInputs(files, io);
+  const wrong = checkInputs(inputs, failures, 'stats', inputFormats, options.from as InputFormat | undefined, [options.output as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
   const format = commonFormat(inputs, options.from as InputFormat | undefined);
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  const ignored = format === 'conllu' ? refuseIgnored(self, [...conversionOptionNames, ...treeReadingOptions], 'CoNLL-U input is measured as it stands, with no conversion') : undefined;
+  if (ignored) return { code: ExitCode.UsageOrIO, messages: [ignored] };
   let settings: ConversionSettings | undefined;
   if (format !== 'conllu') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['constituency trees (bracketed or XML graphs) need a head table to convert them first: --heads NAME'] };
@@ -69,7 +73,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
     if ('problems' in loaded) return { code: ExitCode.UsageOrIO, messages: loaded.problems };
     settings = loaded;
   }
-  const output = Output.to(options.output as string | undefined, io);
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const counter = new CorpusStructureCounter();
   const problems = new ProblemPrinter(io, listingOf(options));
   const problem = problems.report;
@@ -85,7 +89,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
       checkHeads(sentence, problem);
       const checked = treeHeads(sentence);
       if ('problem' in checked) {
-        if (problems.errors === before) problem(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? '(no id)'}: ${checked.problem}; left out`, sentence));
+        if (problems.errors === before) problem(diagnoseItem('not-a-tree', `sentence ${itemName(sentence)}: ${checked.problem}; left out`, sentence));
         skipped++;
         continue;
       }
@@ -93,7 +97,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
       counter.add(structure);
       if (options.arcs === true && structure.nonProjectiveArcs.length > 0) {
         const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
-        if (options.json !== true) await output.write(`${sentence.id ?? `${sentence.file}:${sentence.source?.start.line}`}: ${arcs.join(', ')}\n`);
+        if (options.json !== true) await output.write(`${itemName(sentence, read)}: ${arcs.join(', ')}\n`);
       }
     }
     const result = counter.result();
@@ -108,6 +112,5 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   const outcomes: Array<[number, string]> = [[read - skipped, 'measured'], [skipped, 'left out (not trees)']];
   if (wordless > 0) outcomes.push([wordless, 'without words skipped']);
   io.stderr.write(closingLine(read + wordless, unit, outcomes, [], problems));
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

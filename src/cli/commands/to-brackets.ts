@@ -1,5 +1,6 @@
+import { shippedTables } from '../../tables/table-source.js';
 import { Option, type Command } from 'commander';
-import { diagnoseItem } from '../../diagnostics/diagnostic.js';
+import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
 import { treeHeads } from '../../analysis/heads.js';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
 import { countDiscontinuousPhrases } from '../../model/terminal-order.js';
@@ -10,7 +11,8 @@ import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
-import { openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
+import type { InputFormat } from '../input-format.js';
 import { readSentencesOf } from '../read-trees.js';
 
 export function registerToBrackets(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -18,7 +20,8 @@ export function registerToBrackets(program: Command, io: CliIO, done: (result: C
     .command('to-brackets')
     .description('rebuild constituency trees from dependency trees in CoNLL-U: as bracketings, where arcs that cannot be projective are lifted and marked with *ICH* traces, or as XML graphs, where non-projective subtrees become discontinuous phrases')
     .argument('<files...>', 'CoNLL-U files, or - for standard input')
-    .option('--categories <table>', 'category table: a name in headrules/ or a path', 'ud')
+    .addOption(new Option('--from <format>', 'input format: CoNLL-U, the only one this command reads (for files with other names)').choices(['conllu']))
+    .option('--categories <table>', `category table: a shipped one (${shippedTables('categories').join(', ')}) or a path`, 'ud')
     .addOption(new Option('--shape <shape>', 'flat: one phrase per head; layered: one phrase level per dependent, nearest first').choices(['flat', 'layered']).default('flat'))
     .addOption(new Option('--pos <column>', 'the column that gives the part-of-speech brackets').choices(['upos', 'xpos']).default('upos'))
     .addOption(new Option('--layout <layout>', 'line: one tree per line; indented').choices(['line', 'indented']).default('line'))
@@ -44,7 +47,9 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
     return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
   }
   const { inputs, failures } = await openInputs(files, io);
-  const output = Output.to(options.output as string | undefined, io);
+  const wrong = checkInputs(inputs, failures, 'to-brackets', ['conllu'], options.from as InputFormat | undefined, [options.output as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), options.layout as Layout, report);
@@ -59,7 +64,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
       read++;
       const decoded = options.lossless === true ? decodeBrackets(sentence) : undefined;
       if (isBrokenCarry(decoded)) {
-        report(diagnoseItem('carried-brackets-broken', `sentence ${sentence.id ?? read}: ${decoded.problem}; skipped`, sentence));
+        report(diagnoseItem('carried-brackets-broken', `sentence ${itemName(sentence, read)}: ${decoded.problem}; skipped`, sentence));
         continue;
       }
       const carried = decoded;
@@ -67,7 +72,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
       if (!result) {
         const checked = treeHeads(sentence);
         const why = 'problem' in checked ? checked.problem : 'the heads do not form a tree';
-        report(diagnoseItem('not-a-tree', `sentence ${sentence.id ?? read}: ${why}; skipped`, sentence));
+        report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, read)}: ${why}; skipped`, sentence));
         continue;
       }
       if (settings.discontinuous) discontinuous += countDiscontinuousPhrases(result.tree);
@@ -76,7 +81,7 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
         liftedSentences++;
         if (options.lifts === true) {
           const arcs = result.lifts.map((l) => `${l.dependent}: ${l.from}→${l.to}`).join(', ');
-          io.stderr.write(`${sentence.id ?? `sentence ${read}`}: lifted ${arcs}\n`);
+          io.stderr.write(`${itemName(sentence, read)}: lifted ${arcs}\n`);
         }
       }
       const before = carried ? decodeCarriedTrees(sentence, 'before') : [];
@@ -96,6 +101,5 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   problems.printSummary();
   const notes = [shape, restored > 0 ? `${plural(restored, 'tree')} without words restored from comments` : ''];
   io.stderr.write(closingLine(read, 'sentence', [[written, 'written'], [read - written, 'skipped']], notes, problems));
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

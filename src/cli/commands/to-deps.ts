@@ -11,7 +11,8 @@ import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } fr
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
-import { openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
+import type { InputFormat } from '../input-format.js';
 import { readTreesOf } from '../read-trees.js';
 
 export function registerToDeps(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -30,7 +31,9 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   const settings = conversionSettings(options);
   if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
   const { inputs, failures } = await openInputs(files, io);
-  const output = Output.to(options.output as string | undefined, io);
+  const wrong = checkInputs(inputs, failures, 'to-deps', ['bracketed', 'xml'], options.from as InputFormat | undefined, [options.output as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   let read = 0;
@@ -85,6 +88,5 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   if (carried > 0) outcomes.push([carried, 'without words carried in comments']);
   outcomes.push([skipped, 'skipped']);
   io.stderr.write(closingLine(read, 'tree', outcomes, [], problems));
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

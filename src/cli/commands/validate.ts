@@ -4,10 +4,10 @@ import type { Diagnostic, Report } from '../../diagnostics/diagnostic.js';
 import { formatDiagnostic } from '../../diagnostics/format-diagnostic.js';
 import { BracketedValidator, type ValidationSummary } from '../../validate/validate-bracketed.js';
 import { ConlluValidator, type ConlluSummary } from '../../validate/validate-conllu.js';
-import { addBracketedReadOptions, bracketedReadOptions } from '../bracketed-options.js';
+import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
-import { describeError, openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, describeError, openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { plural } from '../print-problems.js';
 
@@ -21,8 +21,8 @@ export function registerValidate(program: Command, io: CliIO, done: (result: Com
     .option('--source', 'show the source line with a caret, and notes, under each problem')
     .option('--relations <labels>', 'CoNLL-U: the relation set, comma-separated or a file with one per line (default: the 37 universal relations)')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
-  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => {
-    done(await validate(files, options, io));
+  addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => {
+    done(await validate(files, options, io, self));
   });
 }
 
@@ -31,17 +31,24 @@ interface Run {
   summary: ConlluSummary | ValidationSummary;
 }
 
-async function validate(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
+async function validate(files: string[], options: Record<string, unknown>, io: CliIO, self: Command): Promise<CommandResult> {
   const { inputs, failures } = await openInputs(files, io);
+  const wrong = checkInputs(inputs, failures, 'validate', inputFormats, options.from as InputFormat | undefined, [options.output as string | undefined], io);
+  if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
   const format = commonFormat(inputs, options.from as InputFormat | undefined);
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
+  const ignored =
+    format === 'conllu'
+      ? refuseIgnored(self, treeReadingOptions, 'they are for reading bracketed trees, and the input is CoNLL-U')
+      : refuseIgnored(self, ['relations'], 'it declares the relations of CoNLL-U input, and the input holds constituency trees');
+  if (ignored) return { code: ExitCode.UsageOrIO, messages: [ignored] };
   let relations: string[] | undefined;
   if (typeof options.relations === 'string') {
     const declared = readRelations(options.relations, io);
     if (typeof declared === 'string') return { code: ExitCode.UsageOrIO, messages: [declared] };
     relations = declared;
   }
-  const output = Output.to(options.output as string | undefined, io);
+  const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const json = options.json === true;
   const problems: Diagnostic[] = [];
   // A reader reports a stretch of input before its trees are checked, so a
@@ -83,7 +90,7 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
     }
     finished.push(current);
     await flush();
-    const summary = { ...run.summary, files: run.summary.files + failures.length };
+    const summary = run.summary;
     if (json) {
       const report = {
         ...summary,
@@ -98,7 +105,6 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
     await output.abandon();
     throw error;
   }
-  if (failures.length > 0) return { code: ExitCode.UsageOrIO, messages: failures };
   return { code: run.summary.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }
 

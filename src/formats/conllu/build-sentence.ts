@@ -87,8 +87,8 @@ class SentenceBuilder {
         if (lastRange && number === lastRange.end) lastRange = undefined;
         expectedWord = number + 1;
         lastEmpty = { word: number, index: 0 };
-        if (!HEAD.test(head)) this.problem('invalid-head', line, fieldColumn(fields, 6), `HEAD "${head}" is not 0 or a word number`);
-        if (!DEPREL.test(deprel)) this.problem('invalid-deprel', line, fieldColumn(fields, 7), `DEPREL "${deprel}" is not a relation such as "nsubj" or "obl:tmod"`);
+        if (!HEAD.test(head)) this.problem('head-not-word', line, fieldColumn(fields, 6), `HEAD "${head}" is not 0 or a word number`);
+        if (!DEPREL.test(deprel)) this.problem('relation-shape', line, fieldColumn(fields, 7), `DEPREL "${deprel}" is not a relation such as "nsubj" or "obl:tmod"`);
         tokens.push({ type: 'word', ...columns } satisfies DependencyWord);
         continue;
       }
@@ -144,8 +144,8 @@ class SentenceBuilder {
       this.problem('bad-range', lastRange.line, 1, `range runs past the last word, ${expectedWord - 1}`);
       unreadable = true;
     }
-    if (sentIds === 0) this.problem('missing-sent-id', first, 1, 'sentence without a "# sent_id" comment');
-    if (texts === 0) this.problem('missing-text', first, 1, 'sentence without a "# text" comment');
+    if (sentIds === 0) this.problem('no-sentence-id', first, 1, 'sentence without a "# sent_id" comment');
+    if (texts === 0) this.problem('no-text-comment', first, 1, 'sentence without a "# text" comment');
     if (unreadable) return undefined;
     const sentence: DependencySentence = {
       type: 'dependency-sentence',
