@@ -1,4 +1,3 @@
-import { once } from 'node:events';
 import { createWriteStream, existsSync, readdirSync, realpathSync, statSync, unlinkSync, type WriteStream } from 'node:fs';
 import { chmod, open, realpath, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
@@ -121,6 +120,21 @@ function realTarget(target: string): string {
   } catch {
     return target;
   }
+}
+
+/** Resolves when a stream has drained, failed or closed; its listeners are removed, so that waiting often leaks none. */
+function drained(stream: Writable): Promise<void> {
+  return new Promise((resolve) => {
+    const done = () => {
+      stream.off('drain', done);
+      stream.off('error', done);
+      stream.off('close', done);
+      resolve();
+    };
+    stream.on('drain', done);
+    stream.on('error', done);
+    stream.on('close', done);
+  });
 }
 
 /** A file could not be written; its message is the one-line reason for the user. */
@@ -247,10 +261,8 @@ export class Output {
   async write(text: string): Promise<void> {
     this.check();
     if (this.closed) return;
-    if (!this.stream.write(text)) {
-      // Wait for the stream to drain; an error instead is kept by the listener above and thrown below.
-      await Promise.race([once(this.stream, 'drain'), once(this.stream, 'error'), once(this.stream, 'close')]).catch(() => undefined);
-    }
+    // Wait for the stream to drain; an error instead is kept by the listener above and thrown below.
+    if (!this.stream.write(text)) await drained(this.stream);
     this.check();
   }
 

@@ -12,6 +12,11 @@ import type { CoordinationStyle } from './handle-coordination.js';
 import { prepareTree, type TraceMode } from './prepare-tree.js';
 import { insertTraces } from '../reverse/insert-traces.js';
 
+/** CoNLL-U text is in Unicode normalization form C (UD v2 format specification): corpora in other forms are normalised. */
+function nfc(text: string): string {
+  return text.normalize('NFC');
+}
+
 /** Everything a conversion needs besides the tree. */
 export interface ConversionSettings {
   heads: HeadTable;
@@ -50,10 +55,10 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   const lines: DependencyWord[] = words.map((word, i) => ({
     type: 'word',
     id: String(word.index),
-    form: word.form,
-    lemma: word.lemma ?? '_',
+    form: nfc(word.form),
+    lemma: word.lemma === undefined ? '_' : nfc(word.lemma),
     upos: settings.upos?.get(word.pos) ?? '_',
-    xpos: word.pos,
+    xpos: nfc(word.pos),
     feats: '_',
     head: String(attachments[i]!.governor?.index ?? 0),
     deprel: relations[i]!,
@@ -63,8 +68,8 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   const sentence: DependencySentence = {
     type: 'dependency-sentence',
     comments: [
-      { type: 'comment', text: ` sent_id = ${id}` },
-      { type: 'comment', text: ` text = ${words.map((w) => w.form).join(' ')}` },
+      { type: 'comment', text: ` sent_id = ${nfc(id)}` },
+      { type: 'comment', text: ` text = ${lines.map((line) => line.form).join(' ')}` },
     ],
     lines,
     id,

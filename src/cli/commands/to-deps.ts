@@ -6,7 +6,8 @@ import { carryComment } from '../../convert/carry-wordless-trees.js';
 import type { Tree } from '../../model/constituency.js';
 import type { DependencySentence } from '../../model/dependency.js';
 import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
-import { writeSentence } from '../../formats/conllu/write-conllu.js';
+import { unwritableSentenceReason, writeSentence } from '../../formats/conllu/write-conllu.js';
+import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionSettings } from '../conversion-options.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
@@ -60,6 +61,12 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
       if (!conversion) {
         if (settings.lossless) wordless.push(tree);
         else skip(tree);
+        continue;
+      }
+      const unwritable = unwritableSentenceReason(conversion.sentence);
+      if (unwritable) {
+        skipped++;
+        report(diagnoseItem('unwritable-tree', `tree ${itemName(tree)} cannot be written as CoNLL-U: ${unwritable}`, tree));
         continue;
       }
       converted++;

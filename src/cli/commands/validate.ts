@@ -26,6 +26,9 @@ export function registerValidate(program: Command, io: CliIO, done: (result: Com
   });
 }
 
+/** Problems a JSON report lists one by one; the rest are counted in `problemsLeftOut`. */
+const MAX_JSON_PROBLEMS = 10_000;
+
 /** What one run of the validator over one format gives back. */
 interface Run {
   summary: ConlluSummary | ValidationSummary;
@@ -50,32 +53,53 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   }
   const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const json = options.json === true;
-  const problems: Diagnostic[] = [];
-  // A reader reports a stretch of input before its trees are checked, so a
-  // file's problems are held until the next file starts, then printed in file order.
+  // JSON holds the first problems; all are counted. Lines are written as they become final, so
+  // memory holds the problems of one stretch of input, not of the run.
+  const kept: Array<{ file: string; line: number; col: number; severity: string; code: string; message: string }> = [];
+  let leftOut = 0;
+  // A reader reports a stretch of input before its trees are checked: a problem is final, and
+  // printed in offset order, once the item after it begins (or its file ends).
   let current: Diagnostic[] = [];
-  const finished: Diagnostic[][] = [];
   const collect: Report = (diagnostic) => current.push(diagnostic);
-  const flush = async () => {
-    for (const batch of finished.splice(0)) {
-      batch.sort((a, b) => a.offset - b.offset);
-      if (json) problems.push(...batch);
-      else if (batch.length > 0) {
-        await output.write(batch.map((d) => formatDiagnostic(d, { source: options.source === true })).join('\n') + '\n');
+  const emit = async (batch: Diagnostic[]) => {
+    if (batch.length === 0) return;
+    if (json) {
+      for (const diagnostic of batch) {
+        // Only the printed fields are kept: an excerpt could hold on to a whole stretch of the input.
+        const { file, line, column, severity, code, message } = diagnostic;
+        if (kept.length < MAX_JSON_PROBLEMS) kept.push({ file, line, col: column, severity, code, message });
+        else leftOut++;
       }
+      return;
     }
+    await output.write(batch.map((d) => formatDiagnostic(d, { source: options.source === true })).join('\n') + '\n');
   };
+  /** Where each earlier file's problems end in `current`: a file's problems are all final once the next file starts. */
+  const boundaries: number[] = [];
   const nextInput = (startFile: () => void) => () => {
-    finished.push(current);
-    current = [];
+    boundaries.push(current.length);
     startFile();
+  };
+  const byOffset = (a: Diagnostic, b: Diagnostic) => a.offset - b.offset;
+  /** Prints the problems of ended files, then those of the current file before an offset (all of them, without one). */
+  const drain = async (offset = Infinity) => {
+    let from = 0;
+    for (const boundary of boundaries.splice(0)) {
+      await emit(current.slice(from, boundary).sort(byOffset));
+      from = boundary;
+    }
+    const rest = current.slice(from).sort(byOffset);
+    let cut = 0;
+    while (cut < rest.length && rest[cut]!.offset < offset) cut++;
+    current = rest.slice(cut);
+    await emit(rest.slice(0, cut));
   };
   let run: Run;
   try {
     if (format === 'conllu') {
       const validator = new ConlluValidator(collect, relations);
       for await (const sentence of readSentencesOf(inputs, validator.report, io, nextInput(() => validator.startFile()))) {
-        if (finished.length > 0) await flush();
+        await drain(sentence.position?.start ?? 0);
         validator.check(sentence);
       }
       run = validator;
@@ -83,18 +107,18 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
       const validator = new BracketedValidator(collect);
       const trees = readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, nextInput(() => validator.startFile()));
       for await (const tree of trees) {
-        if (finished.length > 0) await flush();
+        await drain(tree.position?.start ?? 0);
         validator.check(tree);
       }
       run = validator;
     }
-    finished.push(current);
-    await flush();
+    await drain();
     const summary = run.summary;
     if (json) {
       const report = {
         ...summary,
-        problems: problems.map(({ file, line, column, severity, code, message }) => ({ file, line, col: column, severity, code, message })),
+        problems: kept,
+        ...(leftOut > 0 ? { problemsLeftOut: leftOut } : {}),
       };
       await output.write(JSON.stringify(report, null, 2) + '\n');
     } else {

@@ -51,6 +51,10 @@ export function writeNode(node: ConstituentNode): string {
   return brackets.line(brackets.add(node));
 }
 
+/** Labels of notes and of the identifier node, as the reader takes them by default. */
+const META_LABELS = new Set(['CODE', 'META']);
+const ID_LABEL = 'ID';
+
 /** Whitespace, brackets, or nothing at all: what a label or leaf of a bracketing cannot hold. */
 const BROKEN_LABEL = /[\s()]/;
 
@@ -65,6 +69,8 @@ const BROKEN_LABEL = /[\s()]/;
  */
 export function unwritableReason(tree: Tree, literalTags: readonly string[] = defaultLiteralTags): string | undefined {
   const literal = literalTagTest([...literalTags]);
+  // Labels the reader gives a meaning of its own: notes, the empty-element tag, and the identifier beside a tree.
+  const special = (label: string) => META_LABELS.has(label) || label === ID_LABEL || label === '-NONE-';
   if (tree.wrapper && BROKEN_LABEL.test(tree.wrapper.label)) return `the outer label ${JSON.stringify(tree.wrapper.label)} holds a space or a bracket`;
   if (tree.id !== undefined && (tree.id === '' || /\s/.test(tree.id))) return `the identifier ${JSON.stringify(tree.id)} is empty or holds a space`;
   // Depth counts brackets as the reader does: the outer one (or the top node) is 1, a word's tag 1 more.
@@ -80,12 +86,14 @@ export function unwritableReason(tree: Tree, literalTags: readonly string[] = de
       case 'phrase': {
         const label = formatLabel(node.label);
         if (label === '' || BROKEN_LABEL.test(label)) return `the label ${JSON.stringify(label)} is empty or holds a space or a bracket`;
+        if (special(label)) return `the phrase label ${label} has a meaning of its own in a bracketing (a note, an identifier or an empty element)`;
         push(node.children);
         break;
       }
       case 'preterminal': {
         const tag = node.functions && node.functions.length > 0 ? [node.pos, ...node.functions].join('-') : node.pos;
         if (tag === '' || BROKEN_LABEL.test(tag)) return `the tag ${JSON.stringify(tag)} is empty or holds a space or a bracket`;
+        if (special(tag)) return `the word ${JSON.stringify(node.word.form)} is tagged ${tag}, which has a meaning of its own in a bracketing (a note, an identifier or an empty element)`;
         const { form, lemma } = node.word;
         if (form === '' || /\s/.test(form)) return `the word ${JSON.stringify(form)} is empty or holds a space`;
         if (lemma !== undefined && (lemma === '' || /\s/.test(lemma))) return `the lemma ${JSON.stringify(lemma)} of "${form}" is empty or holds a space`;

@@ -9,8 +9,9 @@ const RANGE_ID = /^([1-9]\d*)-([1-9]\d*)$/;
 const EMPTY_ID = /^(0|[1-9]\d*)\.([1-9]\d*)$/;
 const HEAD = /^(0|[1-9]\d*)$/;
 const DEPREL = /^[a-z]+(:[a-z]+)?$/;
-const SENT_ID = /^#\s*sent_id\s*=\s*(.*)$/;
-const TEXT = /^#\s*text\s*=\s?(.*)$/;
+// The s flag: a value may hold U+2028 or U+2029, which `.` would not match otherwise.
+const SENT_ID = /^#\s*sent_id\s*=\s*(.*)$/s;
+const TEXT = /^#\s*text\s*=\s?(.*)$/s;
 /** Columns where the specification allows spaces: FORM, LEMMA, MISC. */
 const SPACES_ALLOWED = new Set([1, 2, 9]);
 /** Columns a multiword token line leaves `_`: all but ID, FORM and MISC. */

@@ -3,7 +3,7 @@ import { nodesTopDown } from '../../model/traverse.js';
 import { formatLabel } from '../../model/label.js';
 import { numberTerminals, terminalsInOrder, type Terminal } from '../../model/terminal-order.js';
 import { writeNode } from '../bracketed/write-bracketed.js';
-import { ABSENT, KIND, NOTE, NOTE_BRACKETS, WRAPPER, EMPTY } from './xml-graph-names.js';
+import { ABSENT, KIND, NOTE, NOTE_BRACKETS, WRAPPER, EMPTY, EMPTY_POS, WORD } from './xml-graph-names.js';
 
 /** An element to write: its name, attributes in written order, and child elements. */
 interface Element {
@@ -101,6 +101,8 @@ function terminalElement(terminal: Terminal, ids: Map<ConstituentNode, string>):
       const attributes: Array<[string, string]> = [['id', id], ['word', terminal.word.form]];
       if (terminal.word.lemma !== undefined) attributes.push(['lemma', terminal.word.lemma]);
       attributes.push(['pos', terminal.pos], ...(terminal.attributes ?? []));
+      // A word tagged -NONE- says that it is a word, or it would read back as an empty element.
+      if (terminal.pos === EMPTY_POS) attributes.push([KIND, WORD]);
       return { name: 't', attributes };
     }
     case 'empty':

@@ -20,6 +20,9 @@ export const WRAPPER = 'wrapper';
 /** `kind` of a terminal that stands for an empty element (trace, empty subject …). */
 export const EMPTY = 'empty';
 
+/** `kind` of a terminal that is a word although its tag is `-NONE-` (which would otherwise make it an empty element). */
+export const WORD = 'word';
+
 /** `kind` of a terminal that stands for a note (`CODE`, `META`) with text. */
 export const NOTE = 'note';
 
