@@ -6,6 +6,8 @@ export const ExitCode = {
   Findings: 1,
   /** Bad usage, or a file could not be read or written. */
   UsageOrIO: 2,
+  /** A fault of treebridge itself (a bug): never the input's doing. */
+  Internal: 70,
 } as const;
 
 export type ExitCodeValue = (typeof ExitCode)[keyof typeof ExitCode];

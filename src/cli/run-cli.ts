@@ -52,11 +52,22 @@ export async function runCli(argv: string[], io: CliIO): Promise<number> {
       const informational = ['commander.helpDisplayed', 'commander.version', 'commander.help'];
       return informational.includes(error.code) ? ExitCode.Ok : ExitCode.UsageOrIO;
     }
-    io.stderr.write(`treebridge: ${error instanceof OutputError ? error.message : describeError(error)}\n`);
-    return ExitCode.UsageOrIO;
+    if (error instanceof OutputError || isSystemError(error)) {
+      io.stderr.write(`treebridge: ${error instanceof OutputError ? error.message : describeError(error)}\n`);
+      return ExitCode.UsageOrIO;
+    }
+    // Anything else is a fault of treebridge's, not of the input or the system: said so, with its own code.
+    const detail = error instanceof Error ? (process.env.TREEBRIDGE_DEBUG ? error.stack ?? error.message : error.message) : String(error);
+    io.stderr.write(`treebridge: internal error: ${detail}\n  this is a bug in treebridge: please report it with the command and the input that caused it\n`);
+    return ExitCode.Internal;
   }
   // A bar left drawing would keep its timer, and the process, alive.
   stopStatusLine(io);
   for (const message of result.messages ?? []) io.stderr.write(`treebridge: ${message}\n`);
   return result.code;
+}
+
+/** An error from the operating system (a file that cannot be opened, a full disk …), as Node reports them. */
+function isSystemError(error: unknown): boolean {
+  return error instanceof Error && typeof (error as NodeJS.ErrnoException).code === 'string' && typeof (error as NodeJS.ErrnoException).syscall === 'string';
 }

@@ -26,7 +26,7 @@ import { terminalsInOrder } from '../../src/model/terminal-order.js';
 /** Text a corpus or a hostile file may put in a label, a tag or a word. */
 const awkward = fc.oneof(
   { weight: 6, arbitrary: fc.constantFrom('gull', 'pier', 'Þóra', 'naïve', 'ferry', 'x', 'NP', 'N-N', 'ADV') },
-  { weight: 2, arbitrary: fc.constantFrom('(a)', 'a b', ')', '(', '\\', '*', '0', '*T*-1', '', '-LRB-', 'x\ty', 'né\u00a0ma', '#', '$', '=', 'ID', 'CODE', 'ROOT', '-NONE-', '\u2028', '\u0000', '𝔉', '&amp;', '<t/>', '"') },
+  { weight: 2, arbitrary: fc.constantFrom('(a)', 'a b', ')', '(', '\\', '*', '0', '*T*-1', '', '-LRB-', 'x\ty', 'né\u00a0ma', '#', '$', '=', 'ID', 'CODE', 'ROOT', '-NONE-', '\u2028', '\u0000', '𝔉', '&amp;', '<t/>', '"', 'N\uFEFFNS', 'a\u00a0b', '\u000b') },
   { weight: 2, arbitrary: fc.string({ maxLength: 6 }) },
   { weight: 1, arbitrary: fc.string({ unit: 'grapheme', maxLength: 4 }) },
 );

@@ -56,7 +56,10 @@ const META_LABELS = new Set(['CODE', 'META']);
 const ID_LABEL = 'ID';
 
 /** Whitespace, brackets, or nothing at all: what a label or leaf of a bracketing cannot hold. */
-const BROKEN_LABEL = /[\s()]/;
+// Only the characters the reader takes as space (split-trees: space, tab, line feed, carriage return,
+// form feed, vertical tab) break a label or a word; other spaces (U+00A0, U+FEFF …) are word characters.
+const BROKEN_LABEL = /[ \t\n\r\f\v()]/;
+const SPACE = /[ \t\n\r\f\v]/;
 
 /**
  * Why a tree cannot be written as a bracketing that reads back as the same
@@ -72,7 +75,7 @@ export function unwritableReason(tree: Tree, literalTags: readonly string[] = de
   // Labels the reader gives a meaning of its own: notes, the empty-element tag, and the identifier beside a tree.
   const special = (label: string) => META_LABELS.has(label) || label === ID_LABEL || label === '-NONE-';
   if (tree.wrapper && BROKEN_LABEL.test(tree.wrapper.label)) return `the outer label ${JSON.stringify(tree.wrapper.label)} holds a space or a bracket`;
-  if (tree.id !== undefined && (tree.id === '' || /\s/.test(tree.id))) return `the identifier ${JSON.stringify(tree.id)} is empty or holds a space`;
+  if (tree.id !== undefined && (tree.id === '' || SPACE.test(tree.id))) return `the identifier ${JSON.stringify(tree.id)} is empty or holds a space`;
   // Depth counts brackets as the reader does: the outer one (or the top node) is 1, a word's tag 1 more.
   const outer = tree.wrapper || tree.children.length !== 1 || tree.id !== undefined ? 1 : 0;
   const stack = tree.children.map((node) => ({ node, depth: outer + 1 }));
@@ -95,8 +98,8 @@ export function unwritableReason(tree: Tree, literalTags: readonly string[] = de
         if (tag === '' || BROKEN_LABEL.test(tag)) return `the tag ${JSON.stringify(tag)} is empty or holds a space or a bracket`;
         if (special(tag)) return `the word ${JSON.stringify(node.word.form)} is tagged ${tag}, which has a meaning of its own in a bracketing (a note, an identifier or an empty element)`;
         const { form, lemma } = node.word;
-        if (form === '' || /\s/.test(form)) return `the word ${JSON.stringify(form)} is empty or holds a space`;
-        if (lemma !== undefined && (lemma === '' || /\s/.test(lemma))) return `the lemma ${JSON.stringify(lemma)} of "${form}" is empty or holds a space`;
+        if (form === '' || SPACE.test(form)) return `the word ${JSON.stringify(form)} is empty or holds a space`;
+        if (lemma !== undefined && (lemma === '' || SPACE.test(lemma))) return `the lemma ${JSON.stringify(lemma)} of "${form}" is empty or holds a space`;
         const leaf = lemma === undefined ? form : `${form}-${lemma}`;
         if (readEmptyLeaf(leaf, node.pos, literal)) return `the word ${JSON.stringify(leaf)} under ${JSON.stringify(node.pos)} would read back as an empty element`;
         break;
@@ -104,7 +107,7 @@ export function unwritableReason(tree: Tree, literalTags: readonly string[] = de
       case 'empty': {
         const label = formatLabel(node.label);
         if (label === '' || BROKEN_LABEL.test(label)) return `the label ${JSON.stringify(label)} is empty or holds a space or a bracket`;
-        if (node.text === '' || /[\s()]/.test(node.text)) return `the empty element ${JSON.stringify(node.text)} is empty or holds a space or a bracket`;
+        if (node.text === '' || BROKEN_LABEL.test(node.text)) return `the empty element ${JSON.stringify(node.text)} is empty or holds a space or a bracket`;
         break;
       }
       case 'meta':

@@ -1,10 +1,11 @@
-import { readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { writeTree, type Layout } from '../../../src/formats/bracketed/write-bracketed.js';
 import type { ConstituentNode, Tree } from '../../../src/model/constituency.js';
 import { projectRoot } from '../../support/corpora.js';
 import { read } from '../../support/read.js';
+import { expectFixture } from '../../support/fixtures.js';
 
 const fixtures = join(projectRoot, 'test/fixtures/bracketed');
 const inputs = readdirSync(fixtures).filter((name) => /^[^.]+\.psd$/.test(name));
@@ -74,14 +75,13 @@ describe('writing bracketed trees', () => {
   });
 
   // Fixture pairs: each input has its expected line and indented output beside it.
-  // Run with UPDATE=1 to regenerate them after an intended change, then review the diff.
+  // UPDATE=1 rewrites them after an intended change, and fails with the diff to review.
   it.each(inputs)('matches the expected output files for %s', (name) => {
     const { trees } = read(readFileSync(join(fixtures, name), 'utf8'));
     for (const layout of ['line', 'indented'] as const) {
       const expectedPath = join(fixtures, 'expected', name.replace(/\.psd$/, `.${layout}.psd`));
       const written = writeAll(trees, layout);
-      if (process.env.UPDATE) writeFileSync(expectedPath, written);
-      expect(written).toBe(readFileSync(expectedPath, 'utf8'));
+      expectFixture(expectedPath, written);
     }
   });
 });

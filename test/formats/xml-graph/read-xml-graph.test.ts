@@ -1,4 +1,4 @@
-import { readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Diagnostic } from '../../../src/diagnostics/diagnostic.js';
@@ -10,6 +10,7 @@ import { resolveTraces } from '../../../src/convert/resolve-traces.js';
 import type { Phrase, Preterminal, Tree } from '../../../src/model/constituency.js';
 import { countDiscontinuousPhrases, terminalsInOrder } from '../../../src/model/terminal-order.js';
 import { projectRoot } from '../../support/corpora.js';
+import { expectFixture } from '../../support/fixtures.js';
 
 const fixtures = join(projectRoot, 'test/fixtures');
 
@@ -95,13 +96,12 @@ describe('reading the XML graph encoding', () => {
 });
 
 describe('writing the XML graph encoding', () => {
-  // Fixture pair: run with UPDATE=1 to regenerate after an intended change, then review the diff.
+  // Fixture pair: UPDATE=1 rewrites it after an intended change, and fails with the diff to review.
   it('matches the expected file for the historical-style fixture with traces resolved', () => {
     const trees = readBracketedText(readFileSync(join(fixtures, 'bracketed/historical-style.psd'), 'utf8'), { splitLemmas: true }, () => undefined);
     const written = writeAll(trees.map((tree) => resolveTraces(tree).tree));
     const expectedPath = join(fixtures, 'xml-graph/historical-style.resolved.xml');
-    if (process.env.UPDATE) writeFileSync(expectedPath, written);
-    expect(written).toBe(readFileSync(expectedPath, 'utf8'));
+    expectFixture(expectedPath, written);
     const again = read(written);
     expect(again.problems.filter((p) => p.severity === 'error')).toEqual([]);
     expect(again.trees).toHaveLength(trees.length);
