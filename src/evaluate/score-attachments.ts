@@ -12,6 +12,11 @@ export interface AttachmentScore {
   headsRight: number;
   /** Words with the gold head and the gold relation (universal part, before any colon). */
   labelsRight: number;
+  /** Words whose gold UPOS is given, and those whose UPOS matches it (punctuation included, as UPOS covers it). */
+  uposScored: number;
+  uposRight: number;
+  /** Per feature of the gold (Case, Number …): words whose gold has it, and those that have the same value. */
+  features: Map<string, { scored: number; right: number }>;
 }
 
 /**
@@ -42,7 +47,7 @@ export function isPunctuation(word: DependencyWord): boolean {
  * left out); a pair whose words differ in number or form does not line up.
  */
 export class AttachmentScorer {
-  readonly score: AttachmentScore = { sentences: 0, misaligned: 0, words: 0, headsRight: 0, labelsRight: 0 };
+  readonly score: AttachmentScore = { sentences: 0, misaligned: 0, words: 0, headsRight: 0, labelsRight: 0, uposScored: 0, uposRight: 0, features: new Map() };
   /** Words with the right head and the wrong relation, by `gold → ours` (universal parts). */
   readonly confusions = new Map<string, number>();
 
@@ -52,19 +57,25 @@ export class AttachmentScorer {
     private readonly unscored?: (word: DependencyWord) => boolean,
   ) {}
 
-  /** Scores one pair; returns false (and counts it) when the words do not line up. */
-  add(predicted: DependencySentence, gold: DependencySentence): boolean {
+  /**
+   * Scores one pair; returns false (and counts it) when the words do not line
+   * up. `paired`: the caller has lined the words up already (by the forms of
+   * the source, which the output may have changed: escapes undone, clitic
+   * markers taken off), so only their number is checked.
+   */
+  add(predicted: DependencySentence, gold: DependencySentence, paired = false): boolean {
     const p = predicted.lines.filter((l): l is DependencyWord => l.type === 'word');
     const g = gold.lines.filter((l): l is DependencyWord => l.type === 'word');
-    if (p.length !== g.length || p.some((word, i) => !sameForm(word.form, g[i]!.form))) {
+    if (p.length !== g.length || (!paired && p.some((word, i) => !sameForm(word.form, g[i]!.form)))) {
       this.score.misaligned++;
       return false;
     }
     this.score.sentences++;
     g.forEach((goldWord, i) => {
-      if (!this.withPunctuation && isPunctuation(goldWord)) return;
       if (this.unscored?.(goldWord)) return;
       const word = p[i]!;
+      this.scoreWord(word, goldWord);
+      if (!this.withPunctuation && isPunctuation(goldWord)) return;
       this.score.words++;
       if (word.head !== goldWord.head) return;
       this.score.headsRight++;
@@ -77,6 +88,32 @@ export class AttachmentScorer {
     return true;
   }
 
+  /** UPOS and features of one word against its gold. */
+  private scoreWord(word: DependencyWord, gold: DependencyWord): void {
+    if (gold.upos !== '_') {
+      this.score.uposScored++;
+      if (word.upos === gold.upos) this.score.uposRight++;
+    }
+    if (gold.feats === '_') return;
+    const ours = featureMap(word.feats);
+    for (const [name, value] of featureMap(gold.feats)) {
+      let tally = this.score.features.get(name);
+      if (!tally) this.score.features.set(name, (tally = { scored: 0, right: 0 }));
+      tally.scored++;
+      if (ours.get(name) === value) tally.right++;
+    }
+  }
+
+  get upos(): number {
+    return this.score.uposScored === 0 ? 0 : this.score.uposRight / this.score.uposScored;
+  }
+
+  /** Accuracy of one feature over the words whose gold has it. */
+  feature(name: string): number {
+    const tally = this.score.features.get(name);
+    return !tally || tally.scored === 0 ? 0 : tally.right / tally.scored;
+  }
+
   get uas(): number {
     return this.score.words === 0 ? 0 : this.score.headsRight / this.score.words;
   }
@@ -84,4 +121,15 @@ export class AttachmentScorer {
   get las(): number {
     return this.score.words === 0 ? 0 : this.score.labelsRight / this.score.words;
   }
+}
+
+/** FEATS as a map from name to value (`_` gives none). */
+export function featureMap(feats: string): Map<string, string> {
+  const map = new Map<string, string>();
+  if (feats === '_' || feats === '') return map;
+  for (const pair of feats.split('|')) {
+    const equals = pair.indexOf('=');
+    if (equals > 0) map.set(pair.slice(0, equals), pair.slice(equals + 1));
+  }
+  return map;
 }

@@ -71,9 +71,9 @@ export async function scoreConversion(
       skipped++;
       continue;
     }
-    scorer.add(conversion.sentence, goldSentence);
+    scorer.add(conversion.sentence, goldSentence, true);
     const oracleConversion = convertTree(tree, { ...settings, oracle: heads }, id, id);
-    if (oracleConversion) oracle.add(oracleConversion.sentence, goldSentence);
+    if (oracleConversion) oracle.add(oracleConversion.sentence, goldSentence, true);
     const goldWords = goldSentence.lines.filter((l): l is DependencyWord => l.type === 'word');
     const parentOf = parentsByWord(conversion.root, conversion.words.length);
     conversion.sentence.lines.forEach((line, i) => {
