@@ -10,11 +10,22 @@ import { candidateOf } from './find-heads.js';
  * colon), else `dep`.
  */
 export function assignLabels(attachments: Attachment[], table: LabelTable | undefined, heads: HeadTable): string[] {
-  return attachments.map((attachment) => {
-    if (!attachment.governor || !attachment.parent || !attachment.headNode) return 'root';
+  const contexts = labelContexts(attachments, heads);
+  return attachments.map((attachment, i) => {
+    const context = contexts[i];
+    if (!context) return 'root';
     if (!table) return untabled(attachment);
+    for (const rule of table.rules) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
+    return table.otherwise;
+  });
+}
+
+/** What label rules (and word-class rules) see of each attachment; undefined for the root. */
+export function labelContexts(attachments: Attachment[], heads: HeadTable): Array<LabelContext | undefined> {
+  return attachments.map((attachment) => {
+    if (!attachment.governor || !attachment.parent || !attachment.headNode) return undefined;
     const word = attachment.dependent;
-    const context: LabelContext = {
+    return {
       dependent: candidateOf(attachment.node),
       head: candidateOf(attachment.headNode),
       parent: candidateOf(attachment.parent),
@@ -22,8 +33,6 @@ export function assignLabels(attachments: Attachment[], table: LabelTable | unde
       side: word.index < attachment.governor.index ? 'left' : 'right',
       role: attachment.role === 'other' && heads.punctuation(candidateOf(word)) ? 'punctuation' : attachment.role,
     };
-    for (const rule of table.rules) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
-    return table.otherwise;
   });
 }
 

@@ -2,7 +2,9 @@ import type { PosMap } from '../tables/load-pos-map.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import type { HeadTable, LabelTable } from '../tables/table-model.js';
-import { assignLabels } from './assign-labels.js';
+import { assignLabels, labelContexts } from './assign-labels.js';
+import { classifyWords } from './classify-words.js';
+import { joinWrittenWords } from './join-written-words.js';
 import { attachDependents, type PunctuationPolicy } from './attach-dependents.js';
 import type { ConversionNode, WordNode } from './conversion-tree.js';
 import { findHeads } from './find-heads.js';
@@ -39,11 +41,19 @@ export interface Conversion {
   words: WordNode[];
 }
 
+/** MISC keys of lossless mode that keep a leaf's form and lemma as written, where the output changed them. */
+export const LEAF_KEY = 'Leaf';
+export const LEAF_LEMMA_KEY = 'LeafLemma';
+
+const escapeMisc = (text: string) => text.replace(/[%|= \t]/g, (c) => `%${c.charCodeAt(0).toString(16).padStart(2, '0')}`);
+
 /**
  * Converts a bracketed tree into a dependency sentence, pass by pass:
  * prepare-tree, find-heads (coordination included), attach-dependents
- * (subject raising included), assign-labels. `id` becomes `# sent_id`; `origin` names the source tree in
- * each word's MISC. Undefined for a tree without words.
+ * (subject raising included), assign-labels, classify-words (UPOS and
+ * features), join-written-words (forms, and the written words that pieces
+ * make). `id` becomes `# sent_id`; `origin` names the source tree in each
+ * word's MISC. Undefined for a tree without words.
  */
 export function convertTree(tree: Tree, settings: ConversionSettings, id: string, origin: string): Conversion | undefined {
   const prepared = prepareTree(tree, settings.traces);
@@ -52,24 +62,50 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   findHeads(root, settings.heads, settings.coordination, settings.oracle ? oracleChooser(settings.oracle) : undefined);
   const attachments = attachDependents(root, words, settings.heads, settings.coordination, settings.punctuation);
   const relations = assignLabels(attachments, settings.labels, settings.heads);
-  const lines: DependencyWord[] = words.map((word, i) => ({
-    type: 'word',
-    id: String(word.index),
-    form: nfc(word.form),
-    lemma: word.lemma === undefined ? '_' : nfc(word.lemma),
-    upos: settings.upos?.get(word.pos) ?? '_',
-    xpos: nfc(word.pos),
-    feats: '_',
-    head: String(attachments[i]!.governor?.index ?? 0),
-    deprel: relations[i]!,
-    deps: '_',
-    misc: `From=${origin}`,
-  }));
+  const classes = classifyWords(words, relations, labelContexts(attachments, settings.heads), settings.upos);
+  const surface = joinWrittenWords(
+    words.map((word) => word.form),
+    words.map((word) => word.lemma),
+    settings.upos,
+  );
+  const wordLines: DependencyWord[] = words.map((word, i) => {
+    let misc = `From=${origin}`;
+    const form = nfc(surface.forms[i]!);
+    const lemma = surface.lemmas[i];
+    // Lossless mode keeps the leaf as written where the output changed it, so that it comes back exactly.
+    if (settings.lossless && form !== word.form) misc += `|${LEAF_KEY}=${escapeMisc(word.form)}`;
+    if (settings.lossless && lemma !== undefined && nfc(lemma) !== word.lemma) misc += `|${LEAF_LEMMA_KEY}=${escapeMisc(word.lemma!)}`;
+    return {
+      type: 'word',
+      id: String(word.index),
+      form,
+      lemma: lemma === undefined ? '_' : nfc(lemma),
+      upos: classes[i]!.upos,
+      xpos: nfc(word.pos),
+      feats: classes[i]!.feats,
+      head: String(attachments[i]!.governor?.index ?? 0),
+      deprel: relations[i]!,
+      deps: '_',
+      misc,
+    };
+  });
+  // A written word of several pieces stands above them as a multiword token.
+  const lines: DependencySentence['lines'] = [];
+  const tokens: string[] = [];
+  let w = 0;
+  for (const group of surface.written) {
+    while (w < group.first - 1) tokens.push(wordLines[w]!.form), lines.push(wordLines[w++]!);
+    const form = nfc(group.form);
+    lines.push({ type: 'multiword', id: `${group.first}-${group.last}`, form, lemma: '_', upos: '_', xpos: '_', feats: '_', head: '_', deprel: '_', deps: '_', misc: '_' });
+    tokens.push(form);
+    while (w < group.last) lines.push(wordLines[w++]!);
+  }
+  while (w < wordLines.length) tokens.push(wordLines[w]!.form), lines.push(wordLines[w++]!);
   const sentence: DependencySentence = {
     type: 'dependency-sentence',
     comments: [
       { type: 'comment', text: ` sent_id = ${nfc(id)}` },
-      { type: 'comment', text: ` text = ${lines.map((line) => line.form).join(' ')}` },
+      { type: 'comment', text: ` text = ${tokens.join(' ')}` },
     ],
     lines,
     id,
@@ -79,7 +115,7 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
     const encoded = encodeBrackets(tree.discontinuous ? insertTraces(tree).tree : tree, settings);
     if (encoded) {
       sentence.comments.push({ type: 'comment', text: ` brackets = ${encoded.sentence}` });
-      lines.forEach((line, i) => {
+      wordLines.forEach((line, i) => {
         if (encoded.words[i]) line.misc += `|${BRACKETS_KEY}=${encoded.words[i]}`;
       });
     }

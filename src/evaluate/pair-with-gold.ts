@@ -46,6 +46,7 @@ export async function* pairWithGold(
   traces: TraceMode,
   report: Report,
   tally: PairingTally,
+  optional?: (word: DependencyWord) => boolean,
 ): AsyncGenerator<GoldPair> {
   const goldIterator = gold[Symbol.asyncIterator]();
   const treeIterator = trees[Symbol.asyncIterator]();
@@ -73,9 +74,17 @@ export async function* pairWithGold(
         report(diagnoseItem('unpaired', `the gold ran out: tree ${itemName(tree)} and ${left - 1} more tree${left - 1 === 1 ? '' : 's'} after it have no gold sentence; left out`, tree));
         break;
       }
-      const goldSentence = nextGold.value;
+      let goldSentence = nextGold.value;
       const id = tree.id ?? goldSentence.id ?? String(tally.paired + tally.misaligned + 1);
-      const problem = alignmentProblem(prepared.words, goldSentence);
+      let problem = alignmentProblem(prepared.words, goldSentence);
+      if (problem && optional) {
+        // Gold words marked as not scored may be words the trees do not have: the gold is read without them.
+        const reduced = withoutMissing(prepared.words, goldSentence, optional);
+        if (reduced) {
+          goldSentence = reduced;
+          problem = undefined;
+        }
+      }
       if (problem) {
         tally.misaligned++;
         report(diagnoseItem('misaligned', `tree ${itemName(tree)} and gold sentence ${itemName(goldSentence)} do not line up: ${problem}; left out`, tree));
@@ -104,6 +113,34 @@ function alignmentProblem(words: WordNode[], gold: DependencySentence): string |
   const at = words.findIndex((word, i) => !sameForm(word.form, goldWords[i]!.form));
   if (at !== -1) return `word ${at + 1} is "${words[at]!.form}" against "${goldWords[at]!.form}"`;
   return undefined;
+}
+
+/**
+ * The gold sentence without the optional words the tree lacks, lined up by
+ * form, or undefined when the words do not line up even so. A left-out word's
+ * dependents hang from its head instead, and the words are numbered anew.
+ */
+function withoutMissing(words: WordNode[], gold: DependencySentence, optional: (word: DependencyWord) => boolean): DependencySentence | undefined {
+  const goldWords = gold.lines.filter((line): line is DependencyWord => line.type === 'word');
+  const keep = new Array<boolean>(goldWords.length).fill(false);
+  let j = 0;
+  for (const word of words) {
+    while (j < goldWords.length && !sameForm(word.form, goldWords[j]!.form) && optional(goldWords[j]!)) j++;
+    if (j >= goldWords.length || !sameForm(word.form, goldWords[j]!.form)) return undefined;
+    keep[j++] = true;
+  }
+  for (; j < goldWords.length; j++) if (!optional(goldWords[j]!)) return undefined;
+  const number = new Array<number>(goldWords.length + 1).fill(0);
+  let next = 0;
+  goldWords.forEach((_, i) => (number[i + 1] = keep[i] ? ++next : 0));
+  // The nearest kept word up the chain of heads (0 for the root), with a bound against cycles in a broken gold.
+  const keptHead = (word: number): number => {
+    let head = Number(goldWords[word - 1]!.head);
+    for (let steps = 0; head > 0 && !keep[head - 1] && steps < goldWords.length; steps++) head = Number(goldWords[head - 1]!.head);
+    return head > 0 && keep[head - 1] ? number[head]! : 0;
+  };
+  const lines = goldWords.flatMap((word, i) => (keep[i] ? [{ ...word, id: String(number[i + 1]), head: /^\d+$/.test(word.head) ? String(keptHead(i + 1)) : word.head }] : []));
+  return { ...gold, lines };
 }
 
 /** A line for people: how many pairs, and what was left out. */

@@ -1,6 +1,6 @@
 import type { Report } from '../diagnostics/diagnostic.js';
 import { convertTree, type ConversionSettings } from '../convert/convert-tree.js';
-import { headVector } from '../analysis/heads.js';
+import { headVector, wordsOf } from '../analysis/heads.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { AttachmentScorer, isPunctuation, universalPart } from './score-attachments.js';
@@ -64,7 +64,7 @@ export async function scoreConversion(
   const errors: AttachmentError[] = [];
   const parents = new Map<string, ParentTally>();
   let skipped = 0;
-  for await (const { tree, gold: goldSentence, id } of pairWithGold(trees, gold, settings.traces, report, tally)) {
+  for await (const { tree, gold: goldSentence, id } of pairWithGold(trees, gold, settings.traces, report, tally, unscored)) {
     const conversion = convertTree(tree, settings, id, id);
     const heads = headVector(goldSentence);
     if (!conversion || !heads) {
@@ -76,7 +76,8 @@ export async function scoreConversion(
     if (oracleConversion) oracle.add(oracleConversion.sentence, goldSentence, true);
     const goldWords = goldSentence.lines.filter((l): l is DependencyWord => l.type === 'word');
     const parentOf = parentsByWord(conversion.root, conversion.words.length);
-    conversion.sentence.lines.forEach((line, i) => {
+    const oracleWords = oracleConversion ? wordsOf(oracleConversion.sentence) : [];
+    wordsOf(conversion.sentence).forEach((line, i) => {
       const goldWord = goldWords[i]!;
       if (!withPunctuation && isPunctuation(goldWord)) return;
       if (unscored?.(goldWord)) return;
@@ -89,7 +90,7 @@ export async function scoreConversion(
       if (line.head === goldWord.head) return;
       tally.errors++;
       if (tally.examples.length < 3 && !tally.examples.includes(id)) tally.examples.push(id);
-      const oracleRight = oracleConversion?.sentence.lines[i]?.head === goldWord.head;
+      const oracleRight = oracleWords[i]?.head === goldWord.head;
       errors.push({
         sentence: id,
         parent: category,

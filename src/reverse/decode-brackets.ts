@@ -3,6 +3,7 @@ import type { ConstituentNode, Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { parseLabel } from '../model/label.js';
 import { BRACKETS_KEY } from '../convert/encode-brackets.js';
+import { LEAF_KEY, LEAF_LEMMA_KEY } from '../convert/convert-tree.js';
 import { carriedTexts, type CarrySide } from '../convert/carry-wordless-trees.js';
 
 const unescape = (text: string) => text.replace(/%([0-9a-f]{2})/g, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
@@ -73,10 +74,13 @@ export function decodeBrackets(sentence: DependencySentence): Tree | BrokenCarry
         continue;
       }
       const word = words[entry.index - 1]!;
+      // The leaf as written, where the output changed it (escapes undone, join markers taken off).
+      const leaf = miscValue(word.misc, LEAF_KEY);
+      const leafLemma = miscValue(word.misc, LEAF_LEMMA_KEY);
       let current: ConstituentNode = {
         type: 'preterminal',
         pos: word.xpos,
-        word: { type: 'word', form: word.form, lemma: word.lemma === '_' ? undefined : word.lemma },
+        word: { type: 'word', form: leaf ?? word.form, lemma: leafLemma ?? (word.lemma === '_' ? undefined : word.lemma) },
       };
       for (const level of levelsOf(entry.index)) {
         const children: ConstituentNode[] = [];
@@ -105,6 +109,12 @@ export function decodeBrackets(sentence: DependencySentence): Tree | BrokenCarry
 /** True for what {@link decodeBrackets} gives back when the carried bracketing is broken. */
 export function isBrokenCarry(result: Tree | BrokenCarry | undefined): result is BrokenCarry {
   return result !== undefined && 'problem' in result;
+}
+
+/** A MISC value by key, percent-escapes undone; undefined when absent. */
+function miscValue(misc: string, key: string): string | undefined {
+  const part = misc.split('|').find((p) => p.startsWith(`${key}=`));
+  return part === undefined ? undefined : unescape(part.slice(key.length + 1));
 }
 
 /** The trees without words that lossless mode carried on one side of a sentence (see carry-wordless-trees). */

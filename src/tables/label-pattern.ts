@@ -18,7 +18,7 @@ export type Matcher = (candidate: Candidate) => boolean;
  * Compiles a label pattern: `NP` (category NP, any function tags), `NP-PRD`
  * (and function tag PRD), `*-PRD` (any category with PRD), `*-` (any category
  * without function tags), `VB*` (category starting VB), `*` (anything); a head-word test `[pos=…]`, `[form=…]` or
- * `[lemma=…]` narrows it (values may end in `*` for a prefix; forms and lemmas
+ * `[lemma=…]` narrows it (values may hold `*` for any run of characters; forms and lemmas
  * compare without case).
  */
 export function compilePattern(pattern: PatternSyntax): Matcher {
@@ -59,11 +59,24 @@ function compileHeadWordTest(test: HeadWordTestSyntax): Matcher {
 /** A test of a value against a list: exact, or a prefix for values ending in `*`; without case when asked. */
 export function valueTest(values: string[], ignoreCase: boolean): (value: string) => boolean {
   const norm = (value: string) => (ignoreCase ? value.toLowerCase() : value);
-  const exact = new Set(values.filter((v) => !v.endsWith('*') || v === '*').map(norm));
-  const prefixes = values.filter((v) => v.endsWith('*') && v !== '*').map((v) => norm(v.slice(0, -1)));
-  if (exact.has('*')) return () => true;
+  const exact = new Set(values.filter((v) => !v.includes('*')).map(norm));
+  // Values with `*` anywhere are patterns: `VB*` a prefix, `*-D` a suffix, `*` anything.
+  const patterns = values.filter((v) => v.includes('*')).map((v) => globTest(norm(v)));
   return (value) => {
     const v = norm(value);
-    return exact.has(v) || prefixes.some((prefix) => v.startsWith(prefix));
+    return exact.has(v) || patterns.some((test) => test(v));
   };
+}
+
+/** A test of a value against a pattern in which `*` stands for any run of characters (`NS-*`, `*-D`, `*`). */
+export function globTest(pattern: string): (value: string) => boolean {
+  if (pattern === '*') return () => true;
+  if (!pattern.includes('*')) return (value) => value === pattern;
+  const star = pattern.indexOf('*');
+  if (star === pattern.length - 1 && pattern.indexOf('*') === pattern.lastIndexOf('*')) {
+    const prefix = pattern.slice(0, -1);
+    return (value) => value.startsWith(prefix);
+  }
+  const regex = new RegExp('^' + pattern.split('*').map((part) => part.replace(/[.+?^${}()|[\]\\]/g, '\\$&')).join('.*') + '$');
+  return (value) => regex.test(value);
 }
