@@ -9,10 +9,10 @@ import { fileURLToPath } from 'node:url';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 
 /** The kinds of table, by the extension of their files in `headrules/`. */
-export type TableKind = 'heads' | 'labels' | 'pos' | 'categories';
+export type TableKind = 'heads' | 'labels' | 'pos' | 'categories' | 'features';
 
 /** What each kind is called in messages. */
-export const tableKindNames: Record<TableKind, string> = { heads: 'head table', labels: 'label table', pos: 'POS map', categories: 'category table' };
+export const tableKindNames: Record<TableKind, string> = { heads: 'head table', labels: 'label table', pos: 'POS map', categories: 'category table', features: 'feature inventory' };
 
 /** Largest table file read (1 MiB): shipped tables are a few KiB; a learned one stays far below. */
 export const MAX_TABLE_BYTES = 1024 * 1024;

@@ -2,6 +2,8 @@ import { diagnose, type Diagnostic, type Report } from '../diagnostics/diagnosti
 import { fieldColumn } from '../formats/conllu/conllu-line.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { checkDependencyTree } from './check-dependency-tree.js';
+import { checkWordColumns } from './check-word-columns.js';
+import type { FeatureInventory } from '../tables/load-feature-inventory.js';
 
 /** The 37 universal relations of UD v2 (../shared/CHECK-VALUES.md §6). */
 export const universalRelations: readonly string[] = [
@@ -32,7 +34,12 @@ export class ConlluValidator {
   private readonly relations: Set<string>;
   private readonly sentIds = new Map<string, string>();
 
-  constructor(forward: Report, relations: readonly string[] = universalRelations) {
+  constructor(
+    forward: Report,
+    relations: readonly string[] = universalRelations,
+    /** The features FEATS may use; undefined: no check. */
+    private readonly features?: FeatureInventory,
+  ) {
     this.relations = new Set(relations);
     this.report = (diagnostic: Diagnostic) => {
       if (diagnostic.severity === 'error') this.summary.errors++;
@@ -50,6 +57,7 @@ export class ConlluValidator {
     const words = sentence.lines.filter((line): line is DependencyWord => line.type === 'word');
     this.summary.words += words.length;
     checkDependencyTree(sentence, this.report);
+    checkWordColumns(sentence, this.report, this.features);
     for (const word of words) {
       // A relation of the wrong shape is an error of its own (relation-shape).
       if (!/^[a-z]+(:[a-z]+)?$/.test(word.deprel) || this.relations.has(word.deprel)) continue;

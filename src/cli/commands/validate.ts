@@ -9,7 +9,10 @@ import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { checkInputs, describeError, openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
-import { plural } from '../print-problems.js';
+import { plural, tableErrorLines } from '../print-problems.js';
+import { loadFeatureInventory, type FeatureInventory } from '../../tables/load-feature-inventory.js';
+import { TableError } from '../../tables/table-source.js';
+import { resolve } from 'node:path';
 
 export function registerValidate(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -20,6 +23,7 @@ export function registerValidate(program: Command, io: CliIO, done: (result: Com
     .option('--json', 'print a JSON report instead of lines')
     .option('--source', 'show the source line with a caret, and notes, under each problem')
     .option('--relations <labels>', 'CoNLL-U: the relation set, comma-separated or a file with one per line (default: the 37 universal relations)')
+    .option('--features <file>', "CoNLL-U: a file declaring a treebank's own features and values (one feature per line, its name then its values), added to the universal ones; repeat it for several", (value: string, previous: string[]) => [...previous, value], [])
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => {
     done(await validate(files, options, io, self));
@@ -43,13 +47,23 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   const ignored =
     format === 'conllu'
       ? refuseIgnored(self, treeReadingOptions, 'they are for reading bracketed trees, and the input is CoNLL-U')
-      : refuseIgnored(self, ['relations'], 'it declares the relations of CoNLL-U input, and the input holds constituency trees');
+      : refuseIgnored(self, ['relations', 'features'], 'they declare what CoNLL-U input may use, and the input holds constituency trees');
   if (ignored) return { code: ExitCode.UsageOrIO, messages: [ignored] };
   let relations: string[] | undefined;
   if (typeof options.relations === 'string') {
     const declared = readRelations(options.relations, io);
     if (typeof declared === 'string') return { code: ExitCode.UsageOrIO, messages: [declared] };
     relations = declared;
+  }
+  let features: FeatureInventory | undefined;
+  if (format === 'conllu') {
+    try {
+      features = loadFeatureInventory('ud');
+      for (const file of options.features as string[]) loadFeatureInventory(io.cwd ? resolve(io.cwd, file) : file, features);
+    } catch (error) {
+      if (!(error instanceof TableError)) throw error;
+      return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
+    }
   }
   const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const json = options.json === true;
@@ -97,7 +111,7 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   let run: Run;
   try {
     if (format === 'conllu') {
-      const validator = new ConlluValidator(collect, relations);
+      const validator = new ConlluValidator(collect, relations, features);
       for await (const sentence of readSentencesOf(inputs, validator.report, io, nextInput(() => validator.startFile()))) {
         await drain(sentence.position?.start ?? 0);
         validator.check(sentence);

@@ -78,6 +78,7 @@ class SentenceBuilder {
         continue;
       }
       this.checkFields(line, fields);
+      this.checkColumnSyntax(line, fields);
       const [idText, form, lemma, upos, xpos, feats, head, deprel, deps, misc] = fields as [string, string, string, string, string, string, string, string, string, string];
       const columns = { id: idText, form, lemma, upos, xpos, feats, head, deprel, deps, misc, position: this.span(line) };
       if (WORD_ID.test(idText)) {
@@ -173,6 +174,30 @@ class SentenceBuilder {
     }
   }
 
+  /**
+   * The inner syntax of FEATS, DEPS and MISC (UD v2 format specification,
+   * CHECK-VALUES §6): FEATS `_` or `Name=Value` pairs sorted by name (case
+   * aside), each name once, several values sorted and joined by commas; DEPS
+   * `_` or `head:relation` pairs sorted by head; MISC `_` or items joined by
+   * `|`, none empty.
+   */
+  private checkColumnSyntax(line: SourceLine, fields: string[]): void {
+    const feats = fields[5]!;
+    if (feats !== '_' && feats !== '') {
+      const problem = featsProblem(feats);
+      if (problem) this.problem('feats-shape', line, fieldColumn(fields, 5), problem);
+    }
+    const deps = fields[8]!;
+    if (deps !== '_' && deps !== '') {
+      const problem = depsProblem(deps);
+      if (problem) this.problem('deps-shape', line, fieldColumn(fields, 8), problem);
+    }
+    const misc = fields[9]!;
+    if (misc !== '_' && misc !== '' && misc.split('|').some((item) => item === '')) {
+      this.problem('misc-shape', line, fieldColumn(fields, 9), `MISC "${misc}" has an empty item between its bars`);
+    }
+  }
+
   private span(line: SourceLine) {
     return { start: line.offset, end: line.offset + line.text.length };
   }
@@ -191,4 +216,43 @@ function columnName(index: number): string {
 function isNfc(text: string): boolean {
   // eslint-disable-next-line no-control-regex
   return /^[\x00-\x7f]*$/.test(text) || text.normalize('NFC') === text;
+}
+
+const FEATURE_PAIR = /^([A-Z0-9][A-Za-z0-9]*(?:\[[a-z0-9]+\])?)=([A-Z0-9][A-Za-z0-9]*(?:,[A-Z0-9][A-Za-z0-9]*)*)$/;
+
+/** Why a FEATS value is not well formed, or undefined. */
+export function featsProblem(feats: string): string | undefined {
+  let previous: string | undefined;
+  for (const pair of feats.split('|')) {
+    const match = FEATURE_PAIR.exec(pair);
+    if (!match) return `FEATS item "${pair}" is not Name=Value (a capitalised name, values of letters and digits)`;
+    const [, name, values] = match as unknown as [string, string, string];
+    if (previous !== undefined) {
+      const order = previous.toLowerCase().localeCompare(name.toLowerCase());
+      if (order === 0 && previous === name) return `feature ${name} is given twice`;
+      if (order > 0) return `features are not sorted by name: ${previous} before ${name}`;
+    }
+    const list = values.split(',');
+    for (let k = 1; k < list.length; k++) {
+      if (list[k - 1]!.toLowerCase().localeCompare(list[k]!.toLowerCase()) >= 0) return `the values of ${name} are not sorted, or repeat: ${values}`;
+    }
+    previous = name;
+  }
+  return undefined;
+}
+
+// Enhanced relations may carry subtypes in lower-case letters of any script and underscores (obl:v_průběhu).
+const DEPS_PAIR = /^(0|[1-9]\d*(?:\.[1-9]\d*)?):([a-z]+(?::[\p{Ll}\p{Lm}\p{Lo}\p{M}_]+)*)$/u;
+
+/** Why a DEPS value is not well formed, or undefined. */
+export function depsProblem(deps: string): string | undefined {
+  let previous = -1;
+  for (const pair of deps.split('|')) {
+    const match = DEPS_PAIR.exec(pair);
+    if (!match) return `DEPS item "${pair}" is not head:relation (a word number, or an empty node such as 3.1, then a relation)`;
+    const head = Number(match[1]);
+    if (head < previous) return `DEPS items are not sorted by head: ${pair} after head ${previous}`;
+    previous = head;
+  }
+  return undefined;
 }
