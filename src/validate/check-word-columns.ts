@@ -36,6 +36,11 @@ export function checkWordColumns(sentence: DependencySentence, report: Report, f
       let offset = 0;
       for (const pair of line.deps.split('|')) {
         const head = pair.slice(0, pair.indexOf(':'));
+        // A head of the wrong shape is the reader's to report (deps-shape).
+        if (!/^\d+(\.\d+)?$/.test(head)) {
+          offset += pair.length + 1;
+          continue;
+        }
         if (head === line.id) at(line, 8, offset, 'deps-target', `DEPS of ${line.id} points at ${line.id} itself`);
         else if (head !== '' && !ids.has(head)) at(line, 8, offset, 'deps-target', `DEPS head ${head} is no word or empty node of this sentence`);
         offset += pair.length + 1;

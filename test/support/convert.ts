@@ -25,8 +25,9 @@ export function arcs(text: string, heads: string, extra: Partial<ConversionSetti
     ...extra,
   };
   const result = convertTree(tree, settings, 't', 't')!;
-  const forms = result.sentence.lines.map((l) => l.form);
-  return result.sentence.lines.map((l) => `${l.form}→${l.head === '0' ? 'ROOT' : forms[Number(l.head) - 1]}/${l.deprel}`);
+  const words = result.sentence.lines.filter((l) => l.type === 'word');
+  const forms = words.map((l) => l.form);
+  return words.map((l) => `${l.form}→${l.head === '0' ? 'ROOT' : forms[Number(l.head) - 1]}/${l.deprel}`);
 }
 
 export type { ConversionNode };

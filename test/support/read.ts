@@ -29,11 +29,12 @@ export function validate(text: string, options: BracketedReadOptions = {}) {
 
 import { readConlluText } from '../../src/formats/conllu/read-conllu.js';
 import { ConlluValidator } from '../../src/validate/validate-conllu.js';
+import { loadFeatureInventory } from '../../src/tables/load-feature-inventory.js';
 
 /** Reads and validates CoNLL-U text: the problems `treebridge validate` would print, and the sentences read. */
 export function validateConllu(text: string, relations?: string[]) {
   const problems: Diagnostic[] = [];
-  const validator = new ConlluValidator((d) => problems.push(d), relations);
+  const validator = new ConlluValidator((d) => problems.push(d), relations, loadFeatureInventory('ud'));
   validator.startFile();
   const sentences = readConlluText(text, { file: 't.conllu' }, validator.report);
   for (const sentence of sentences) validator.check(sentence);
