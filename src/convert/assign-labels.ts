@@ -25,10 +25,15 @@ export function labelContexts(attachments: Attachment[], heads: HeadTable): Arra
   return attachments.map((attachment) => {
     if (!attachment.governor || !attachment.parent || !attachment.headNode) return undefined;
     const word = attachment.dependent;
+    const siblings = attachment.parent.children;
+    const at = siblings.indexOf(attachment.node);
     return {
       dependent: candidateOf(attachment.node),
       head: candidateOf(attachment.headNode),
       parent: candidateOf(attachment.parent),
+      children: attachment.node.kind === 'phrase' ? attachment.node.children.map(candidateOf) : [],
+      previous: at > 0 ? candidateOf(siblings[at - 1]!) : undefined,
+      next: at >= 0 && at + 1 < siblings.length ? candidateOf(siblings[at + 1]!) : undefined,
       word: { pos: word.pos, form: word.form, lemma: word.lemma },
       side: word.index < attachment.governor.index ? 'left' : 'right',
       role: attachment.role === 'other' && heads.punctuation(candidateOf(word)) ? 'punctuation' : attachment.role,

@@ -60,7 +60,7 @@ const statementShapes = z.discriminatedUnion('keyword', [
   z.object({ keyword: z.literal('otherwise'), words: z.tuple([word]) }),
 ]);
 const relation = /^[a-z]+(:[a-z]+)?$/;
-const conditionKeys = ['dependent', 'head', 'parent', 'pos', 'form', 'lemma', 'side', 'role'] as const;
+const conditionKeys = ['dependent', 'head', 'parent', 'child', 'previous', 'next', 'pos', 'form', 'lemma', 'side', 'role'] as const;
 
 /** One table file of a chain: its statements, and where problems in it are placed. */
 interface Link {
@@ -350,6 +350,14 @@ class TableLoader {
     if (key === 'dependent' || key === 'head' || key === 'parent') {
       const matcher = this.anyOf(values.map((text) => ({ ...w, text })));
       return (context) => matcher(context[key]);
+    }
+    if (key === 'child') {
+      const matcher = this.anyOf(values.map((text) => ({ ...w, text })));
+      return (context) => context.children.some(matcher);
+    }
+    if (key === 'previous' || key === 'next') {
+      const matcher = this.anyOf(values.map((text) => ({ ...w, text })));
+      return (context) => context[key] !== undefined && matcher(context[key]!);
     }
     if (key === 'side' || key === 'role') {
       const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'punctuation', 'raised', 'other'];

@@ -53,7 +53,7 @@ export interface HeadTable {
 
 /** A condition of a label rule, compiled. */
 export interface LabelCondition {
-  key: 'dependent' | 'head' | 'parent' | 'pos' | 'form' | 'lemma' | 'side' | 'role';
+  key: 'dependent' | 'head' | 'parent' | 'child' | 'previous' | 'next' | 'pos' | 'form' | 'lemma' | 'side' | 'role';
   test: (context: LabelContext) => boolean;
 }
 
@@ -65,6 +65,11 @@ export interface LabelContext {
   head: import('./label-pattern.js').Candidate;
   /** That phrase. */
   parent: import('./label-pattern.js').Candidate;
+  /** The children of the dependent's phrase (none for a word). */
+  children: import('./label-pattern.js').Candidate[];
+  /** The siblings just before and after the dependent's phrase in its parent, when it has them. */
+  previous?: import('./label-pattern.js').Candidate;
+  next?: import('./label-pattern.js').Candidate;
   /** The dependent's head word. */
   word: { pos: string; form: string; lemma: string | undefined };
   /** Where the dependent stands from its head. */
