@@ -72,9 +72,23 @@ describe('the table language', () => {
     expect(table.rules.map((r) => [r.relation, r.conditions.map((c) => c.key)])).toEqual([['nsubj', ['dependent', 'side']]]);
     expect(problems(() => compileLabelTable('label Subject dependent=NP\nlabel obj colour=red\nlabel obj side=up\n'))).toEqual([
       'table-invalid@1:7: "Subject" is not a relation such as nsubj or obl:tmod',
-      'table-invalid@2:11: "colour" is not a condition: dependent, head, parent, pos, form, lemma, side, role',
+      'table-invalid@2:11: "colour" is not a condition: dependent, head, parent, child, previous, next, pos, form, lemma, side, role',
       'table-invalid@3:11: side is left or right, not "up"',
     ]);
+  });
+
+  it('tests a phrase by its children and its neighbours (child=, previous=, next=), head-word tests with commas included', async () => {
+    const { convertTree } = await import('../../src/convert/convert-tree.js');
+    const { read } = await import('../support/read.js');
+    const labels = compileLabelTable(
+      'table l\nlabel advcl dependent=SBAR child=IN[form=because,unless]\nlabel ccomp dependent=SBAR\nlabel iobj dependent=NP next=NP\nlabel obj dependent=NP side=right\notherwise dep\n',
+    );
+    const convert = (text: string) =>
+      convertTree(read(text).trees[0]!, { heads: loadHeadTable('en-content'), labels, traces: 'keep', coordination: 'first', punctuation: 'phrase' }, 't', 't')!
+        .sentence.lines.map((l) => `${l.form}/${l.deprel}`);
+    expect(convert('(S (NP-SBJ (NN keeper)) (VP (VBD gave) (NP (NNS gulls)) (NP (NN bread))))')).toEqual(['keeper/dep', 'gave/root', 'gulls/iobj', 'bread/obj']);
+    expect(convert('(S (NP-SBJ (NN keeper)) (VP (VBD stayed) (SBAR (IN because) (S (NP-SBJ (NN fog)) (VP (VBD fell))))))')[4]).toBe('fell/advcl');
+    expect(convert('(S (NP-SBJ (NN keeper)) (VP (VBD said) (SBAR (IN that) (S (NP-SBJ (NN fog)) (VP (VBD fell))))))')[4]).toBe('fell/ccomp');
   });
 
   it('loads every shipped table, and documents each block with a comment', async () => {
