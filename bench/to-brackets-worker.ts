@@ -2,7 +2,7 @@
 // build, write to the null device); prints sentences, words, seconds and peak memory as JSON.
 import { closeSync, openSync, writeSync } from 'node:fs';
 import { devNull } from 'node:os';
-import { writeTree } from '../src/formats/bracketed/write-bracketed.js';
+import { writeTree } from '../src/traces/write-tree.js';
 import { readConlluFile } from '../src/formats/conllu/read-conllu.js';
 import { buildBrackets } from '../src/reverse/build-brackets.js';
 import { loadCategoryTable } from '../src/tables/load-category-table.js';

@@ -5,7 +5,7 @@
 // - `read FILE`: reads an XML document into trees, all of it counted.
 // Prints trees, words, seconds and peak memory as JSON.
 import { closeSync, openSync, writeSync } from 'node:fs';
-import { resolveTraces } from '../src/convert/resolve-traces.js';
+import { resolveTraces } from '../src/traces/resolve-traces.js';
 import { readBracketedFileBatches } from '../src/formats/bracketed/read-bracketed.js';
 import { readXmlGraphFile } from '../src/formats/xml-graph/read-xml-graph.js';
 import { writeXmlSentence, xmlDocumentEnd, xmlDocumentStart } from '../src/formats/xml-graph/write-xml-graph.js';

@@ -1,7 +1,8 @@
 import { diagnose, diagnoseItem, itemName, type Report } from '../diagnostics/diagnostic.js';
-import { unwritableReason, writeTree, type Layout } from '../formats/bracketed/write-bracketed.js';
+import { unwritableReason, type Layout } from '../formats/bracketed/write-bracketed.js';
+import { writeTree } from '../traces/write-tree.js';
 import { writeXmlSentence, xmlDocumentEnd, xmlDocumentStart } from '../formats/xml-graph/write-xml-graph.js';
-import { insertTraces } from '../reverse/insert-traces.js';
+import { insertTraces } from '../traces/insert-traces.js';
 import type { Tree } from '../model/constituency.js';
 import { LineIndex } from '../model/line-index.js';
 import type { Output } from './io.js';

@@ -9,10 +9,8 @@ import { attachDependents, type PunctuationPolicy } from './attach-dependents.js
 import type { ConversionNode, WordNode } from './conversion-tree.js';
 import { findHeads } from './find-heads.js';
 import { oracleChooser } from './oracle-heads.js';
-import { BRACKETS_KEY, encodeBrackets } from './encode-brackets.js';
 import type { CoordinationStyle } from './handle-coordination.js';
 import { prepareTree, type TraceMode } from './prepare-tree.js';
-import { insertTraces } from '../reverse/insert-traces.js';
 
 /** CoNLL-U text is in Unicode normalization form C (UD v2 format specification): corpora in other forms are normalised. */
 function nfc(text: string): string {
@@ -30,22 +28,14 @@ export interface ConversionSettings {
   upos?: PosMap;
   /** Gold heads of the words, to convert as the head-percolation oracle does (see oracle-heads). */
   oracle?: readonly number[];
-  /** Carry the bracketing in MISC and a comment, so that it comes back exactly (see encode-brackets). */
-  lossless?: boolean;
 }
 
-/** A converted tree: the CoNLL-U sentence, and the prepared tree with its heads, for explanations. */
+/** A converted tree: the CoNLL-U sentence, and the prepared tree with its heads, for explanations and lossless mode. */
 export interface Conversion {
   sentence: DependencySentence;
   root: ConversionNode;
   words: WordNode[];
 }
-
-/** MISC keys of lossless mode that keep a leaf's form and lemma as written, where the output changed them. */
-export const LEAF_KEY = 'Leaf';
-export const LEAF_LEMMA_KEY = 'LeafLemma';
-
-const escapeMisc = (text: string) => text.replace(/[%|= \t]/g, (c) => `%${c.charCodeAt(0).toString(16).padStart(2, '0')}`);
 
 /**
  * Converts a bracketed tree into a dependency sentence, pass by pass:
@@ -69,12 +59,8 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
     settings.upos,
   );
   const wordLines: DependencyWord[] = words.map((word, i) => {
-    let misc = `From=${origin}`;
     const form = nfc(surface.forms[i]!);
     const lemma = surface.lemmas[i];
-    // Lossless mode keeps the leaf as written where the output changed it, so that it comes back exactly.
-    if (settings.lossless && form !== word.form) misc += `|${LEAF_KEY}=${escapeMisc(word.form)}`;
-    if (settings.lossless && lemma !== undefined && nfc(lemma) !== word.lemma) misc += `|${LEAF_LEMMA_KEY}=${escapeMisc(word.lemma!)}`;
     return {
       type: 'word',
       id: String(word.index),
@@ -86,7 +72,7 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
       head: String(attachments[i]!.governor?.index ?? 0),
       deprel: relations[i]!,
       deps: '_',
-      misc,
+      misc: `From=${origin}`,
     };
   });
   // A written word of several pieces stands above them as a multiword token.
@@ -110,15 +96,5 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
     lines,
     id,
   };
-  if (settings.lossless) {
-    // A discontinuous tree is carried as its bracketing with *ICH* traces.
-    const encoded = encodeBrackets(tree.discontinuous ? insertTraces(tree).tree : tree, settings);
-    if (encoded) {
-      sentence.comments.push({ type: 'comment', text: ` brackets = ${encoded.sentence}` });
-      wordLines.forEach((line, i) => {
-        if (encoded.words[i]) line.misc += `|${BRACKETS_KEY}=${encoded.words[i]}`;
-      });
-    }
-  }
   return { sentence, root, words };
 }

@@ -1,7 +1,7 @@
 import type { ConstituentNode, Tree } from '../model/constituency.js';
 import { formatLabel, parseLabel } from '../model/label.js';
 import type { ConversionNode, WordNode } from './conversion-tree.js';
-import { resolveTraces } from './resolve-traces.js';
+import { resolveTraces } from '../traces/resolve-traces.js';
 import { postOrder, rebuildBottomUp } from '../model/traverse.js';
 
 /** How traces are treated: where phrases stand, or where their traces stand. */

@@ -4,9 +4,10 @@ import { nodesBottomUp, nodesTopDown } from '../model/traverse.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
 import { treeHeads } from '../analysis/heads.js';
-import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../reverse/decode-brackets.js';
-import { carryComment } from '../convert/carry-wordless-trees.js';
-import { writeTree } from '../formats/bracketed/write-bracketed.js';
+import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../lossless/decode-brackets.js';
+import { carryBrackets } from '../lossless/carry-brackets.js';
+import { carryComment } from '../lossless/carry-wordless-trees.js';
+import { writeTree } from '../traces/write-tree.js';
 import type { HeadTable } from '../tables/table-model.js';
 import { AttachmentScorer } from './score-attachments.js';
 import { bracketScores, emptyTotals, scoreBrackets, type BracketTotals, type Span } from './parseval.js';
@@ -126,16 +127,19 @@ export class BracketRoundTrip {
     private readonly samplesPerKind = 0,
     /** False: punctuation words are left out of the spans before scoring (common practice). */
     private readonly countPunctuation = true,
+    /** Lossless mode: the bracketing is carried through the dependencies and must come back exactly. */
+    private readonly lossless = false,
   ) {}
 
   add(tree: Tree, id: string): Tree | undefined {
     const dependencies = convertTree(tree, this.conversion, id, id);
     if (!dependencies) {
-      if (this.conversion.lossless) return this.carryWordless(tree, id);
+      if (this.lossless) return this.carryWordless(tree, id);
       this.wordless++;
       return undefined;
     }
-    const decoded = this.conversion.lossless ? decodeBrackets(dependencies.sentence) : undefined;
+    if (this.lossless) carryBrackets(tree, dependencies, this.conversion);
+    const decoded = this.lossless ? decodeBrackets(dependencies.sentence) : undefined;
     if (isBrokenCarry(decoded)) {
       this.note('other', id);
       return undefined;

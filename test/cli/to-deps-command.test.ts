@@ -49,6 +49,6 @@ describe('treebridge heads explain', () => {
   it('names, for each phrase, the step and pattern that chose its head', async () => {
     const { code, stdout } = await cli(['heads', 'explain', '--heads', 'en-content', '--sentence', '1', demo('harbour.psd')]);
     expect(code).toBe(0);
-    expect(stdout.split('\n')[1]).toMatch(/^ {2}S → VP "left": S SQ SINV \(line \d+\): left each VP \*-PRD S SINV SQ \[matched VP\]$/);
+    expect(stdout.split('\n')[1]).toMatch(/^ {2}S → VP "left": S SQ \(line \d+\): left each VP \*-PRD S SINV SQ \[matched VP\]$/);
   });
 });

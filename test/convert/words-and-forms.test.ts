@@ -5,8 +5,9 @@ import { describe, expect, it } from 'vitest';
 import { convertTree, type ConversionSettings } from '../../src/convert/convert-tree.js';
 import { writeSentence } from '../../src/formats/conllu/write-conllu.js';
 import { readConlluText } from '../../src/formats/conllu/read-conllu.js';
-import { decodeBrackets } from '../../src/reverse/decode-brackets.js';
-import { writeTree } from '../../src/formats/bracketed/write-bracketed.js';
+import { decodeBrackets } from '../../src/lossless/decode-brackets.js';
+import { carryBrackets } from '../../src/lossless/carry-brackets.js';
+import { writeTree } from '../../src/traces/write-tree.js';
 import { loadHeadTable, loadLabelTable } from '../../src/tables/load-table.js';
 import { loadPosMap } from '../../src/tables/load-pos-map.js';
 import { validateConllu } from '../support/read.js';
@@ -94,7 +95,8 @@ describe('UD words from a Penn-Treebank-style tree', () => {
       [keeper, historical, true],
     ] as const) {
       const original = tree(text, lemmas);
-      const sentence = convertTree(original, { ...settings, lossless: true }, original.id!, 't')!.sentence;
+      const conversion = convertTree(original, settings, original.id!, 't')!;
+      const sentence = carryBrackets(original, conversion, settings);
       const back = readConlluText(writeSentence(sentence), {}, () => undefined)[0]!;
       expect(writeTree(decodeBrackets(back) as Tree)).toBe(writeTree(original));
     }

@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { Diagnostic } from '../../src/diagnostics/diagnostic.js';
 import { readBracketedFile, readBracketedText } from '../../src/formats/bracketed/read-bracketed.js';
-import { writeTree } from '../../src/formats/bracketed/write-bracketed.js';
+import { writeTree } from '../../src/traces/write-tree.js';
 import { corpusFiles, nltkOutlines } from '../support/corpora.js';
 import { outline } from '../support/tree-outline.js';
 

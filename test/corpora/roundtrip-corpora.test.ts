@@ -10,7 +10,7 @@ import { loadHeadTable } from '../../src/tables/load-table.js';
 import { loadPosMap } from '../../src/tables/load-pos-map.js';
 import { corpusFiles } from '../support/corpora.js';
 import { cli } from '../support/cli.js';
-import { writeTree } from '../../src/formats/bracketed/write-bracketed.js';
+import { writeTree } from '../../src/traces/write-tree.js';
 
 describe.each([
   ['GUM with en-function', 'gum/const', '.ptb', 'en-function', false],
@@ -41,8 +41,12 @@ describe.each([
 ] as const)('lossless round trip of %s', (name, folder, extension, heads, lemmas) => {
   it('gives back every tree exactly: function tags, empty elements and coindices included, trees without words in comments', async () => {
     const trip = new BracketRoundTrip(
-      { heads: loadHeadTable(heads), traces: 'keep', coordination: 'first', punctuation: 'phrase', lossless: true },
+      { heads: loadHeadTable(heads), traces: 'keep', coordination: 'first', punctuation: 'phrase' },
       { categories: loadCategoryTable('ud'), shape: 'flat', pos: 'xpos' },
+      5,
+      0,
+      true,
+      true,
     );
     let trees = 0;
     let exact = 0;

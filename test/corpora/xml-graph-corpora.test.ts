@@ -14,7 +14,7 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { resolveTraces } from '../../src/convert/resolve-traces.js';
+import { resolveTraces } from '../../src/traces/resolve-traces.js';
 import { readBracketedFile } from '../../src/formats/bracketed/read-bracketed.js';
 import { readConlluText } from '../../src/formats/conllu/read-conllu.js';
 import { cli } from '../support/cli.js';

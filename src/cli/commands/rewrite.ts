@@ -1,6 +1,6 @@
 import { Option, type Command } from 'commander';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
-import { resolveTraces } from '../../convert/resolve-traces.js';
+import { resolveTraces } from '../../traces/resolve-traces.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';

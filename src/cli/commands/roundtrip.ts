@@ -1,6 +1,6 @@
 import { shippedTables } from '../../tables/table-source.js';
 import { Option, type Command } from 'commander';
-import { insertTraces } from '../../reverse/insert-traces.js';
+import { insertTraces } from '../../traces/insert-traces.js';
 import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport, type RoundTripSample } from '../../evaluate/roundtrip.js';
 import { writeReport } from '../../report/write-report.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
@@ -68,7 +68,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces, whose restored reading it is.
     const settings = conversionSettings(format === 'xml' ? { ...options, traces: 'resolve' } : options);
     if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
+    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore', options.lossless === true);
     let number = 0;
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       number++;

@@ -6,7 +6,7 @@ import type { Layout } from '../../formats/bracketed/write-bracketed.js';
 import { countDiscontinuousPhrases } from '../../model/terminal-order.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
 import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
-import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../../reverse/decode-brackets.js';
+import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../../lossless/decode-brackets.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';

@@ -1,6 +1,5 @@
 import type { ConstituentNode, Tree } from '../../model/constituency.js';
 import { formatLabel } from '../../model/label.js';
-import { insertTraces } from '../../reverse/insert-traces.js';
 import { escapeLeaf, literalTagTest, readEmptyLeaf } from './leaves.js';
 import { defaultLiteralTags } from './read-options.js';
 import { MAX_TREE_DEPTH } from '../../model/limits.js';
@@ -24,14 +23,14 @@ export interface WriteOptions {
 }
 
 /**
- * Writes one tree, ending with a line feed (and a blank line in the indented
- * layout). A discontinuous tree is first made continuous with `*ICH*` traces
- * (insert-traces), as a bracketing holds only continuous phrases. Trees of any
- * depth are written without recursion. A tree that a bracketing cannot hold
- * (see {@link unwritableReason}) throws; check it first.
+ * Writes one tree as a bracketing, ending with a line feed (and a blank line in
+ * the indented layout). Trees of any depth are written without recursion. A
+ * bracketing holds only continuous phrases: a discontinuous tree must be given
+ * *ICH* traces first (insertTraces; writeTree in traces/ does both). A tree that
+ * a bracketing cannot hold (see {@link unwritableReason}) throws; check it first.
  */
-export function writeTree(tree: Tree, options: WriteOptions = {}): string {
-  if (tree.discontinuous) tree = insertTraces(tree).tree;
+export function writeBracketing(tree: Tree, options: WriteOptions = {}): string {
+  if (tree.discontinuous) throw new Error(`tree ${tree.id ?? '(no id)'} is discontinuous: give it *ICH* traces (insertTraces) before writing it as a bracketing`);
   const reason = unwritableReason(tree);
   if (reason) throw new Error(`cannot write tree ${tree.id ?? '(no id)'} as a bracketing: ${reason}`);
   const brackets = new Brackets();

@@ -1,7 +1,8 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { writeTree, type Layout } from '../../../src/formats/bracketed/write-bracketed.js';
+import { type Layout } from '../../../src/formats/bracketed/write-bracketed.js';
+import { writeTree } from '../../../src/traces/write-tree.js';
 import type { ConstituentNode, Tree } from '../../../src/model/constituency.js';
 import { projectRoot } from '../../support/corpora.js';
 import { read } from '../../support/read.js';

@@ -1,6 +1,6 @@
 import type { Comment } from '../model/dependency.js';
 import type { Tree } from '../model/constituency.js';
-import { writeTree } from '../formats/bracketed/write-bracketed.js';
+import { writeTree } from '../traces/write-tree.js';
 
 /**
  * Lossless mode: a tree without words (a heading, a note, a bare identifier)

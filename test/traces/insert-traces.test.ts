@@ -7,12 +7,12 @@
 import { describe, expect, it } from 'vitest';
 import { analyseTree } from '../../src/analysis/structure.js';
 import { convertTree } from '../../src/convert/convert-tree.js';
-import { resolveTraces } from '../../src/convert/resolve-traces.js';
+import { resolveTraces } from '../../src/traces/resolve-traces.js';
 import { readConlluText } from '../../src/formats/conllu/read-conllu.js';
-import { writeTree } from '../../src/formats/bracketed/write-bracketed.js';
+import { writeTree } from '../../src/traces/write-tree.js';
 import { countDiscontinuousPhrases } from '../../src/model/terminal-order.js';
 import { buildBrackets } from '../../src/reverse/build-brackets.js';
-import { insertTraces } from '../../src/reverse/insert-traces.js';
+import { insertTraces } from '../../src/traces/insert-traces.js';
 import { loadCategoryTable } from '../../src/tables/load-category-table.js';
 import { loadHeadTable } from '../../src/tables/load-table.js';
 import { random, randomTree } from '../support/random-trees.js';

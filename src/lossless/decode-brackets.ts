@@ -2,9 +2,9 @@ import { readBracketedText } from '../formats/bracketed/read-bracketed.js';
 import type { ConstituentNode, Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { parseLabel } from '../model/label.js';
-import { BRACKETS_KEY } from '../convert/encode-brackets.js';
-import { LEAF_KEY, LEAF_LEMMA_KEY } from '../convert/convert-tree.js';
-import { carriedTexts, type CarrySide } from '../convert/carry-wordless-trees.js';
+import { BRACKETS_KEY } from './encode-brackets.js';
+import { LEAF_KEY, LEAF_LEMMA_KEY } from './carry-brackets.js';
+import { carriedTexts, type CarrySide } from './carry-wordless-trees.js';
 
 const unescape = (text: string) => text.replace(/%([0-9a-f]{2})/g, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
 

@@ -1,10 +1,10 @@
 import type { ConstituentNode, Phrase, Preterminal, Tree } from '../model/constituency.js';
 import { formatLabel } from '../model/label.js';
 import { writeNode } from '../formats/bracketed/write-bracketed.js';
-import { findHeads } from './find-heads.js';
-import { prepareTree } from './prepare-tree.js';
-import type { ConversionSettings } from './convert-tree.js';
-import type { ConversionNode } from './conversion-tree.js';
+import { findHeads } from '../convert/find-heads.js';
+import { prepareTree } from '../convert/prepare-tree.js';
+import type { ConversionSettings } from '../convert/convert-tree.js';
+import type { ConversionNode } from '../convert/conversion-tree.js';
 import { nodesTopDown, preOrder } from '../model/traverse.js';
 
 /**

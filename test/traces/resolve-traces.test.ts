@@ -2,7 +2,7 @@
 // their reading ("interpret the antecedent where the trace stands" for *T*, *ICH*,
 // *EXP*, *RNR*) follow the bracketing conventions (Bies et al. 1995, from memory).
 import { describe, expect, it } from 'vitest';
-import { resolveTraces } from '../../src/convert/resolve-traces.js';
+import { resolveTraces } from '../../src/traces/resolve-traces.js';
 import { writeNode } from '../../src/formats/bracketed/write-bracketed.js';
 import type { ConstituentNode, Phrase, Tree } from '../../src/model/constituency.js';
 import { countDiscontinuousPhrases, orderOf, terminalsInOrder } from '../../src/model/terminal-order.js';
