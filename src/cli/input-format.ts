@@ -1,4 +1,17 @@
-import type { Input } from './io.js';
+
+/** An input file as the user named it, and its bytes. */
+export interface Input {
+  /** The name as given (`-` for standard input). */
+  name: string;
+  /** Opens the input; a file starts being read at once, so it can be opened ahead of its turn. */
+  open: () => AsyncIterable<Buffer | string>;
+  /** Size in bytes when known (files), for the progress bar. */
+  size?: number;
+  /** What the first bytes of a file look like (see {@link sniffFormat}); undefined for standard input or an empty file. */
+  sniffed?: InputFormat;
+  /** The file's real path, for telling an output that would overwrite it. */
+  realPath?: string;
+}
 
 /** The input formats treebridge reads: bracketed trees, CoNLL-U, and the XML graph encoding. */
 export type InputFormat = 'bracketed' | 'conllu' | 'xml';

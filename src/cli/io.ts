@@ -3,7 +3,7 @@ import { chmod, open, realpath, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import type { Readable, Writable } from 'node:stream';
 import { openAhead } from '../formats/bracketed/read-bracketed.js';
-import { formatOf, sniffFormat, type InputFormat } from './input-format.js';
+import { formatOf, sniffFormat, type Input, type InputFormat } from './input-format.js';
 
 /** The streams a CLI run talks through; tests pass their own. */
 export interface CliIO {
@@ -14,19 +14,7 @@ export interface CliIO {
   cwd?: string;
 }
 
-/** An input file as the user named it, and its bytes. */
-export interface Input {
-  /** The name as given (`-` for standard input). */
-  name: string;
-  /** Opens the input; a file starts being read at once, so it can be opened ahead of its turn. */
-  open: () => AsyncIterable<Buffer | string>;
-  /** Size in bytes when known (files), for the progress bar. */
-  size?: number;
-  /** What the first bytes of a file look like (see {@link sniffFormat}); undefined for standard input or an empty file. */
-  sniffed?: InputFormat;
-  /** The file's real path, for telling an output that would overwrite it. */
-  realPath?: string;
-}
+export type { Input } from './input-format.js';
 
 /** Resolves input names to inputs; unreadable ones are returned as messages instead. */
 export async function openInputs(names: string[], io: CliIO): Promise<{ inputs: Input[]; failures: string[] }> {

@@ -23,6 +23,14 @@ export interface WordNode {
   source: Preterminal;
 }
 
+/** The parts of a coordinated phrase, as child indices (found by handle-coordination). */
+export interface Coordination {
+  conjuncts: number[];
+  coordinators: number[];
+  /** Punctuation children between the first and the last conjunct. */
+  separators: number[];
+}
+
 /** A phrase over at least one word. */
 export interface PhraseNode {
   kind: 'phrase';
@@ -36,7 +44,7 @@ export interface PhraseNode {
   /** Filled by find-heads: the word its heads lead down to. */
   headWord?: WordNode;
   /** Filled by find-heads when the phrase is a coordination drawn in a style. */
-  coordination?: import('./handle-coordination.js').Coordination;
+  coordination?: Coordination;
   /** The bracket it was read from; absent for the sentence-level group of several top nodes. */
   source?: Phrase;
 }

@@ -1,6 +1,8 @@
 import type { Candidate } from '../tables/label-pattern.js';
 import type { HeadTable } from '../tables/table-model.js';
-import type { PhraseNode } from './conversion-tree.js';
+import type { Coordination, PhraseNode } from './conversion-tree.js';
+
+export type { Coordination } from './conversion-tree.js';
 
 /**
  * How coordination is drawn:
@@ -14,14 +16,6 @@ import type { PhraseNode } from './conversion-tree.js';
  * punctuation) hang from the head in every style.
  */
 export type CoordinationStyle = 'first' | 'last' | 'conjunction' | 'table';
-
-/** The parts of a coordinated phrase, as child indices. */
-export interface Coordination {
-  conjuncts: number[];
-  coordinators: number[];
-  /** Punctuation children between the first and the last conjunct. */
-  separators: number[];
-}
 
 /**
  * Finds coordination in a phrase: a coordinator with a conjunct before and

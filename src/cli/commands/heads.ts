@@ -4,16 +4,15 @@ import { findHeads } from '../../convert/find-heads.js';
 import { prepareTree } from '../../convert/prepare-tree.js';
 import { itemName } from '../../diagnostics/diagnostic.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
-import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { addConversionOptions, conversionOptionsOf, conversionSettings } from '../conversion-options.js';
 import { addListingOptions, listingOf, plural, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
-import { scoreConversion, type ConversionScore } from '../../evaluate/score-conversion.js';
+import type { ConversionScore } from '../../evaluate/score-conversion.js';
+import { scoreHeads as scoreHeadsOf, suggestHeads as suggestHeadsOf } from '../../api/evaluate.js';
 import { describePairing, emptyTally, pairingIncomplete, type PairingTally } from '../../evaluate/pair-with-gold.js';
-import type { DependencyWord } from '../../model/dependency.js';
-import { collectPhrases, suggestBlocks, writeSuggestedTable } from '../../evaluate/suggest-heads.js';
 import { basename, dirname, relative, resolve } from 'node:path';
 import { findTable, headrulesFolder, readTableText } from '../../tables/table-source.js';
 import { wholeNumber } from '../whole-number.js';
@@ -125,22 +124,20 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
     ...checkInputs(gold.inputs, gold.failures, 'heads score --gold', ['conllu'], undefined, outputs, io),
   ];
   if (wrong.length > 0) return { code: ExitCode.UsageOrIO, messages: wrong };
-  const unscored = unscoredTest(options.unscored);
+  const unscored = unscoredOption(options.unscored);
   if (typeof unscored === 'string') return { code: ExitCode.UsageOrIO, messages: [unscored] };
   const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
-  const tally = emptyTally();
+  let tally = emptyTally();
   try {
-    const result = await scoreConversion(
+    const result = await scoreHeadsOf(
       readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
       readSentencesOf(gold.inputs, report, io),
-      settings,
+      { ...conversionOptionsOf(options), heads: settings.heads, labels: settings.labels, posMap: settings.upos, lossless: false, countPunctuation: options.scorePunctuation === 'count', unscored },
       report,
-      options.scorePunctuation === 'count',
-      tally,
-      unscored,
     );
+    tally = result.pairing;
     if (tally.paired === 0) {
       await output.abandon();
       return { code: ExitCode.Findings, messages: [`nothing to score: no tree paired with a gold sentence (${describePairing(tally)})`] };
@@ -171,14 +168,12 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
   return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
 }
 
-/** `--unscored KEY=V1,V2`: a test for gold words whose MISC has KEY with one of the values. */
-function unscoredTest(value: unknown): ((word: DependencyWord) => boolean) | undefined | string {
+/** `--unscored KEY=V1,V2`: gold words whose MISC has KEY with one of the values. */
+function unscoredOption(value: unknown): { key: string; values: string[] } | undefined | string {
   if (value === undefined) return undefined;
   const match = /^([^=|\s]+)=([^|\s]+)$/.exec(String(value));
   if (!match) return `--unscored takes KEY=VALUE[,VALUE…], a MISC key and its values; got "${String(value)}"`;
-  const key = match[1]!;
-  const values = new Set(match[2]!.split(','));
-  return (word) => word.misc.split('|').some((part) => part.startsWith(key + '=') && values.has(part.slice(key.length + 1)));
+  return { key: match[1]!, values: match[2]!.split(',') };
 }
 
 function round(value: number): number {
@@ -232,16 +227,28 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   const shippedBase = basePath !== undefined && dirname(basePath) === headrulesFolder();
   const written = shippedBase ? basename(basePath!).replace(/\.heads$/, '') : basePath ? relative(dirname(target), basePath) || basename(basePath) : base;
   const inline = basePath !== undefined && resolve(basePath) === target ? readTableText(basePath, 'heads') : undefined;
-  const tally = emptyTally();
-  const collected = await collectPhrases(readTreesOf(trees.inputs, bracketedReadOptions(options), report, io), readSentencesOf(gold.inputs, report, io), settings, report, tally);
+  const suggested = await suggestHeadsOf(
+    readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
+    readSentencesOf(gold.inputs, report, io),
+    {
+      base,
+      name,
+      baseReference: written,
+      inlineBase: inline,
+      minimumPhrases: options.minPhrases as number,
+      minimumGain: options.minGain as number,
+      traces: options.traces as 'keep' | 'resolve',
+      coordination: options.coordination as 'first' | 'last' | 'conjunction' | 'table',
+    },
+    report,
+  );
+  const tally = suggested.pairing;
+  const { changed, kept } = suggested;
+  const collected = { sentences: suggested.sentences };
   if (tally.paired === 0) return { code: ExitCode.Findings, messages: [`nothing to learn from: no tree paired with a gold sentence (${describePairing(tally)})`] };
-  const { changed, kept } = suggestBlocks(collected.samples, settings.heads, {
-    minimumPhrases: options.minPhrases as number,
-    minimumGain: options.minGain as number,
-  });
   const output = Output.to(path, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   try {
-    await output.write(writeSuggestedTable(name, written, collected.sentences, changed, kept, inline) + '\n');
+    await output.write(suggested.text);
     await output.commit();
   } catch (error) {
     await output.abandon();

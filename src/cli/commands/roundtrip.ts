@@ -1,20 +1,18 @@
 import { shippedTables } from '../../tables/table-source.js';
 import { Option, type Command } from 'commander';
-import { insertTraces } from '../../traces/insert-traces.js';
-import { BracketRoundTrip, DependencyRoundTrip, lossKinds, type LossKind, type RoundTripReport, type RoundTripSample } from '../../evaluate/roundtrip.js';
+import { lossKinds, type LossKind, type RoundTripReport } from '../../evaluate/roundtrip.js';
+import { roundTrip, type RoundTrip } from '../../api/evaluate.js';
 import { writeReport } from '../../report/write-report.js';
 import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
-import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
 import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
-import { addConversionOptions, conversionSettings } from '../conversion-options.js';
+import { addConversionOptions, conversionOptionsOf, resolveConversion } from '../conversion-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
-import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
 
 export function registerRoundtrip(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -58,48 +56,37 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   }
   const problems = new ProblemPrinter(io, listingOf(options));
   let read = 0;
-  let leftOut = 0;
-  let unit = 'tree';
-  let report: RoundTripReport;
-  let samples: RoundTripSample[] = [];
+  const counted = async function* <T>(items: AsyncIterable<T>) {
+    for await (const item of items) {
+      read++;
+      yield item;
+    }
+  };
   const drawn = typeof options.report === 'string' ? (options.reportLimit as number) : 0;
+  const tripOptions = {
+    categories,
+    shape: options.shape as 'flat' | 'layered',
+    examples: options.examples as number,
+    samples: drawn,
+    countPunctuation: options.scorePunctuation !== 'ignore',
+  };
+  let trip: RoundTrip;
   if (format !== 'conllu') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['constituency trees (bracketed or XML graphs) need a head table to go to dependencies: --heads NAME'] };
     // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces, whose restored reading it is.
-    const settings = conversionSettings(format === 'xml' ? { ...options, traces: 'resolve' } : options);
-    if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const trip = new BracketRoundTrip(settings, { categories, shape: options.shape as 'flat' | 'layered', pos: 'xpos' }, options.examples as number, drawn, options.scorePunctuation !== 'ignore', options.lossless === true);
-    let number = 0;
-    for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
-      number++;
-      read++;
-      const wordless = trip.wordless;
-      trip.add(tree.discontinuous ? insertTraces(tree).tree : tree, itemName(tree, number));
-      if (trip.wordless > wordless) {
-        leftOut++;
-        reportWordlessTree(tree, problems.report);
-      }
-    }
-    report = trip.report();
-    samples = trip.samples;
+    const resolved = resolveConversion(format === 'xml' ? { ...options, traces: 'resolve' } : options);
+    if ('problems' in resolved) return { code: ExitCode.UsageOrIO, messages: resolved.problems };
+    const conversion = { ...conversionOptionsOf(format === 'xml' ? { ...options, traces: 'resolve' } : options), heads: resolved.settings.heads, labels: resolved.settings.labels, posMap: resolved.settings.upos };
+    trip = await roundTrip({ trees: counted(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) }, { ...conversion, ...tripOptions }, problems.report);
   } else {
-    const settings = conversionSettings({ ...options, heads: options.heads ?? 'ud', traces: 'resolve', coordination: 'table' });
-    if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
-    const trip = new DependencyRoundTrip({ categories, shape: options.shape as 'flat' | 'layered', pos: 'upos' }, settings, options.examples as number, drawn, options.scorePunctuation !== 'ignore');
-    let number = 0;
-    unit = 'sentence';
-    for await (const sentence of readSentencesOf(inputs, problems.report, io)) {
-      number++;
-      read++;
-      const problem = trip.add(sentence, itemName(sentence, number));
-      if (problem) {
-        leftOut++;
-        problems.report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, number)}: ${problem}; left out`, sentence));
-      }
-    }
-    report = trip.report();
-    samples = trip.samples;
+    const resolved = resolveConversion({ heads: options.heads ?? 'ud', labels: options.labels });
+    if ('problems' in resolved) return { code: ExitCode.UsageOrIO, messages: resolved.problems };
+    trip = await roundTrip({ sentences: counted(readSentencesOf(inputs, problems.report, io)) }, { heads: resolved.settings.heads, labels: resolved.settings.labels, ...tripOptions }, problems.report);
   }
+  const unit = format === 'conllu' ? 'sentence' : 'tree';
+  const leftOut = trip.leftOut.length;
+  const report = trip.report;
+  const samples = trip.samples;
   const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
   try {
     await output.write(options.json === true ? JSON.stringify(jsonOf(report), null, 2) + '\n' : formatReport(report));

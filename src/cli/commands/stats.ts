@@ -1,21 +1,16 @@
 import { Option, type Command } from 'commander';
-import { CorpusStructureCounter } from '../../analysis/corpus-structure.js';
+import { convertTrees, emptyConversionTally } from '../../api/convert.js';
+import type { ResolvedConversion } from '../../api/options.js';
+import { analyseStructure } from '../../api/structure.js';
 import { formatCorpusStructure } from '../../analysis/format-structure.js';
-import { treeHeads } from '../../analysis/heads.js';
-import { checkHeads } from '../../validate/check-dependency-tree.js';
-import { analyseTree } from '../../analysis/structure.js';
-import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
-import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
+import { itemName } from '../../diagnostics/diagnostic.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
-import { checkInputs, openInputs, Output, type CliIO, type Input } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { addBracketedReadOptions, bracketedReadOptions, conversionOptionNames, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
-import { addConversionOptions, conversionSettings } from '../conversion-options.js';
-import { convertTree, type ConversionSettings } from '../../convert/convert-tree.js';
-import { reportWordlessTree } from '../../convert/report-wordless-tree.js';
-import type { DependencySentence } from '../../model/dependency.js';
-import type { Report } from '../../diagnostics/diagnostic.js';
+import { addConversionOptions, conversionOptionsOf, resolveConversion } from '../conversion-options.js';
+import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 
 export function registerStats(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -31,33 +26,6 @@ export function registerStats(program: Command, io: CliIO, done: (result: Comman
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => done(await stats(files, options, io, self)));
 }
 
-/** Dependency sentences of the inputs: read as CoNLL-U, or converted from bracketed trees. */
-async function* sentencesOf(
-  format: InputFormat,
-  inputs: Input[],
-  options: Record<string, unknown>,
-  settings: ConversionSettings | undefined,
-  report: Report,
-  io: CliIO,
-  onWordless: () => void,
-): AsyncGenerator<DependencySentence> {
-  if (format === 'conllu') {
-    yield* readSentencesOf(inputs, report, io);
-    return;
-  }
-  let number = 0;
-  for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
-    number++;
-    const id = tree.id ?? `${tree.file}-${number}`;
-    const conversion = convertTree(tree, settings!, id, id);
-    if (conversion) yield conversion.sentence;
-    else {
-      onWordless();
-      reportWordlessTree(tree, report);
-    }
-  }
-}
-
 async function stats(files: string[], options: Record<string, unknown>, io: CliIO, self: Command): Promise<CommandResult> {
   const { inputs, failures } = await openInputs(files, io);
   const wrong = checkInputs(inputs, failures, 'stats', inputFormats, options.from as InputFormat | undefined, [options.output as string | undefined], io);
@@ -66,41 +34,36 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   if (typeof format !== 'string') return { code: ExitCode.UsageOrIO, messages: [format.mixed] };
   const ignored = format === 'conllu' ? refuseIgnored(self, [...conversionOptionNames, ...treeReadingOptions], 'CoNLL-U input is measured as it stands, with no conversion') : undefined;
   if (ignored) return { code: ExitCode.UsageOrIO, messages: [ignored] };
-  let settings: ConversionSettings | undefined;
+  let conversion: ResolvedConversion | undefined;
   if (format !== 'conllu') {
     if (typeof options.heads !== 'string') return { code: ExitCode.UsageOrIO, messages: ['constituency trees (bracketed or XML graphs) need a head table to convert them first: --heads NAME'] };
-    const loaded = conversionSettings(options);
+    const loaded = resolveConversion({ ...options, lossless: false });
     if ('problems' in loaded) return { code: ExitCode.UsageOrIO, messages: loaded.problems };
-    settings = loaded;
+    conversion = loaded;
   }
   const output = Output.to(options.output as string | undefined, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
-  const counter = new CorpusStructureCounter();
   const problems = new ProblemPrinter(io, listingOf(options));
-  const problem = problems.report;
-  let skipped = 0;
+  const tally = emptyConversionTally();
   let read = 0;
-  let wordless = 0;
+  let analysis;
   try {
-    for await (const sentence of sentencesOf(format, inputs, options, settings, problem, io, () => wordless++)) {
-      read++;
-      // Only a tree can be measured: a sentence that is not one is reported and left out. Other
-      // problems (a # text that does not match, an unknown relation) are validate's business.
-      const before = problems.errors;
-      checkHeads(sentence, problem);
-      const checked = treeHeads(sentence);
-      if ('problem' in checked) {
-        if (problems.errors === before) problem(diagnoseItem('not-a-tree', `sentence ${itemName(sentence)}: ${checked.problem}; left out`, sentence));
-        skipped++;
-        continue;
+    // Dependency sentences of the inputs: read as CoNLL-U, or converted from constituency trees first.
+    const sentences =
+      conversion === undefined
+        ? readSentencesOf(inputs, problems.report, io)
+        : convertTrees(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io), { ...conversionOptionsOf(options), heads: conversion.settings.heads, labels: conversion.settings.labels, posMap: conversion.settings.upos, lossless: false }, problems.report, tally);
+    const counted = async function* () {
+      for await (const sentence of sentences) {
+        read++;
+        yield sentence;
       }
-      const structure = analyseTree(checked.heads);
-      counter.add(structure);
-      if (options.arcs === true && structure.nonProjectiveArcs.length > 0) {
-        const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
-        if (options.json !== true) await output.write(`${itemName(sentence, read)}: ${arcs.join(', ')}\n`);
-      }
-    }
-    const result = counter.result();
+    };
+    analysis = await analyseStructure(counted(), problems.report, async (sentence, structure) => {
+      if (options.arcs !== true || options.json === true || structure.nonProjectiveArcs.length === 0) return;
+      const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
+      await output.write(`${itemName(sentence, read)}: ${arcs.join(', ')}\n`);
+    });
+    const result = analysis.figures;
     await output.write(options.json === true ? JSON.stringify(result, null, 2) + '\n' : (options.arcs === true ? '\n' : '') + formatCorpusStructure(result));
     await output.commit();
   } catch (error) {
@@ -109,8 +72,8 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   }
   problems.printSummary();
   const unit = format === 'conllu' ? 'sentence' : 'tree';
-  const outcomes: Array<[number, string]> = [[read - skipped, 'measured'], [skipped, 'left out (not trees)']];
-  if (wordless > 0) outcomes.push([wordless, 'without words skipped']);
-  io.stderr.write(closingLine(read + wordless, unit, outcomes, [], problems));
+  const outcomes: Array<[number, string]> = [[read - analysis.notTrees, 'measured'], [analysis.notTrees, 'left out (not trees)']];
+  if (tally.skipped > 0) outcomes.push([tally.skipped, 'without words skipped']);
+  io.stderr.write(closingLine(read + tally.skipped, unit, outcomes, [], problems));
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

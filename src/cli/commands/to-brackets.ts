@@ -1,14 +1,11 @@
-import { shippedTables } from '../../tables/table-source.js';
 import { Option, type Command } from 'commander';
-import { diagnoseItem, itemName } from '../../diagnostics/diagnostic.js';
-import { treeHeads } from '../../analysis/heads.js';
+import { emptyBracketTally, resolveBracketOptions, toBrackets as toBracketsOf, type BracketOptions } from '../../api/brackets.js';
+import { OptionsError } from '../../api/options.js';
+import { itemName } from '../../diagnostics/diagnostic.js';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
-import { countDiscontinuousPhrases } from '../../model/terminal-order.js';
-import { TreeSink, treeOutputFormat } from '../tree-output.js';
-import { buildBrackets, type BracketSettings } from '../../reverse/build-brackets.js';
-import { decodeBrackets, decodeCarriedTrees, isBrokenCarry } from '../../lossless/decode-brackets.js';
-import { loadCategoryTable } from '../../tables/load-category-table.js';
 import { TableError } from '../../tables/load-table.js';
+import { shippedTables } from '../../tables/table-source.js';
+import { TreeSink, treeOutputFormat } from '../tree-output.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
@@ -34,15 +31,18 @@ export function registerToBrackets(program: Command, io: CliIO, done: (result: C
 }
 
 async function toBrackets(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
-  let settings: BracketSettings;
+  const bracketOptions: BracketOptions = {
+    categories: options.categories as string,
+    shape: options.shape as 'flat' | 'layered',
+    pos: options.pos as 'upos' | 'xpos',
+    discontinuous: treeOutputFormat(options.to, options.output) === 'xml',
+    lossless: options.lossless === true,
+  };
+  let settings;
   try {
-    settings = {
-      categories: loadCategoryTable(options.categories as string),
-      shape: options.shape as BracketSettings['shape'],
-      pos: options.pos as BracketSettings['pos'],
-      discontinuous: treeOutputFormat(options.to, options.output) === 'xml',
-    };
+    settings = resolveBracketOptions(bracketOptions);
   } catch (error) {
+    if (error instanceof OptionsError) return { code: ExitCode.UsageOrIO, messages: error.problems };
     if (!(error instanceof TableError)) throw error;
     return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
   }
@@ -53,43 +53,15 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
   const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), options.layout as Layout, report);
-  let read = 0;
-  let discontinuous = 0;
+  const tally = emptyBracketTally();
   let written = 0;
-  let lifted = 0;
-  let liftedSentences = 0;
-  let restored = 0;
   try {
-    for await (const sentence of readSentencesOf(inputs, report, io)) {
-      read++;
-      const decoded = options.lossless === true ? decodeBrackets(sentence) : undefined;
-      if (isBrokenCarry(decoded)) {
-        report(diagnoseItem('carried-brackets-broken', `sentence ${itemName(sentence, read)}: ${decoded.problem}; skipped`, sentence));
-        continue;
+    for await (const rebuilt of toBracketsOf(readSentencesOf(inputs, report, io), { ...bracketOptions, categories: settings.categories }, report, tally)) {
+      if (rebuilt.sentence && rebuilt.lifts.length > 0 && options.lifts === true) {
+        const arcs = rebuilt.lifts.map((l) => `${l.dependent}: ${l.from}→${l.to}`).join(', ');
+        io.stderr.write(`${itemName(rebuilt.sentence, tally.read)}: lifted ${arcs}\n`);
       }
-      const carried = decoded;
-      const result = carried ? { tree: carried, lifts: [] } : buildBrackets(sentence, settings);
-      if (!result) {
-        const checked = treeHeads(sentence);
-        const why = 'problem' in checked ? checked.problem : 'the heads do not form a tree';
-        report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, read)}: ${why}; skipped`, sentence));
-        continue;
-      }
-      if (settings.discontinuous) discontinuous += countDiscontinuousPhrases(result.tree);
-      if (result.lifts.length > 0) {
-        lifted += result.lifts.length;
-        liftedSentences++;
-        if (options.lifts === true) {
-          const arcs = result.lifts.map((l) => `${l.dependent}: ${l.from}→${l.to}`).join(', ');
-          io.stderr.write(`${itemName(sentence, read)}: lifted ${arcs}\n`);
-        }
-      }
-      const before = carried ? decodeCarriedTrees(sentence, 'before') : [];
-      const after = carried ? decodeCarriedTrees(sentence, 'after') : [];
-      restored += before.length + after.length;
-      for (const tree of before) await sink.write(tree);
-      if (await sink.write(result.tree)) written++;
-      for (const tree of after) await sink.write(tree);
+      if ((await sink.write(rebuilt.tree)) && rebuilt.sentence) written++;
     }
     await sink.finish();
     await output.commit();
@@ -97,9 +69,9 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
     await output.abandon();
     throw error;
   }
-  const shape = settings.discontinuous ? plural(discontinuous, 'discontinuous phrase') : `${plural(lifted, 'arc')} lifted in ${plural(liftedSentences, 'sentence')}`;
+  const shape = bracketOptions.discontinuous ? plural(tally.discontinuousPhrases, 'discontinuous phrase') : `${plural(tally.lifted, 'arc')} lifted in ${plural(tally.liftedSentences, 'sentence')}`;
   problems.printSummary();
-  const notes = [shape, restored > 0 ? `${plural(restored, 'tree')} without words restored from comments` : ''];
-  io.stderr.write(closingLine(read, 'sentence', [[written, 'written'], [read - written, 'skipped']], notes, problems));
+  const notes = [shape, tally.restored > 0 ? `${plural(tally.restored, 'tree')} without words restored from comments` : ''];
+  io.stderr.write(closingLine(tally.read, 'sentence', [[written, 'written'], [tally.read - written, 'skipped']], notes, problems));
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
 }

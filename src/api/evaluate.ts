@@ -1,0 +1,172 @@
+import { z } from 'zod';
+import { diagnoseItem, itemName, type Report } from '../diagnostics/diagnostic.js';
+import { reportWordlessTree } from '../convert/report-wordless-tree.js';
+import { emptyTally, type PairingTally } from '../evaluate/pair-with-gold.js';
+import { BracketRoundTrip, DependencyRoundTrip, type RoundTripReport, type RoundTripSample } from '../evaluate/roundtrip.js';
+import { scoreConversion, type ConversionScore } from '../evaluate/score-conversion.js';
+import { collectPhrases, suggestBlocks, writeSuggestedTable, type LearnedBlock } from '../evaluate/suggest-heads.js';
+import type { Tree } from '../model/constituency.js';
+import type { DependencySentence, DependencyWord } from '../model/dependency.js';
+import { insertTraces } from '../traces/insert-traces.js';
+import { bracketOptionsSchema, resolveBracketOptions } from './brackets.js';
+import { checkOptions, conversionOptionsSchema, resolveConversionOptions, type ConversionOptions } from './options.js';
+
+type Stream<T> = AsyncIterable<T> | Iterable<T>;
+
+async function* asAsync<T>(items: Stream<T>): AsyncGenerator<T> {
+  yield* items;
+}
+
+/** How a round trip is scored and what it keeps, besides the conversion and bracketing options. */
+export const roundTripSchema = z.strictObject({
+  /** Example sentence ids per kind of loss. */
+  examples: z.number().int().min(0).default(5),
+  /** Sentences kept for drawing per kind of loss (for the HTML report). */
+  samples: z.number().int().min(0).default(0),
+  /** Count punctuation in the scores (true), or leave it out (common practice). */
+  countPunctuation: z.boolean().default(true),
+});
+
+/** The result of a round trip: the report, and the sentences kept for drawing. */
+export interface RoundTrip {
+  report: RoundTripReport;
+  samples: RoundTripSample[];
+  /** Items that could not make the trip (trees without words, sentences that are not trees), by id. */
+  leftOut: string[];
+}
+
+/**
+ * Takes trees to dependencies and back (PARSEVAL scores and a taxonomy of
+ * what was lost), or dependency sentences to brackets and back (attachment
+ * scores), as `treebridge roundtrip` does. Trees need conversion options
+ * (`heads` at least); sentences are read back with `heads` (default `ud`) and
+ * traces resolved.
+ */
+export async function roundTrip(
+  items: { trees: Stream<Tree> } | { sentences: Stream<DependencySentence> },
+  options: Partial<ConversionOptions> & z.input<typeof bracketOptionsSchema> & z.input<typeof roundTripSchema>,
+  report: Report = () => undefined,
+): Promise<RoundTrip> {
+  const { examples, samples, countPunctuation, categories, shape, pos, ...conversionInput } = options;
+  const trip = checkOptions(roundTripSchema, { examples, samples, countPunctuation });
+  const leftOut: string[] = [];
+  if ('trees' in items) {
+    const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'xpos' });
+    const resolved = resolveConversionOptions(checkOptions(conversionOptionsSchema, conversionInput));
+    const runner = new BracketRoundTrip(resolved.settings, bracketing, trip.examples, trip.samples, trip.countPunctuation, resolved.lossless);
+    let number = 0;
+    for await (const tree of asAsync(items.trees)) {
+      number++;
+      const id = itemName(tree, number);
+      const wordless = runner.wordless;
+      // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces.
+      runner.add(tree.discontinuous ? insertTraces(tree).tree : tree, id);
+      if (runner.wordless > wordless) {
+        leftOut.push(id);
+        reportWordlessTree(tree, report);
+      }
+    }
+    return { report: runner.report(), samples: runner.samples, leftOut };
+  }
+  const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'upos' });
+  const resolved = resolveConversionOptions({ heads: conversionInput.heads ?? 'ud', labels: conversionInput.labels, traces: 'resolve', coordination: 'table' });
+  const runner = new DependencyRoundTrip(bracketing, resolved.settings, trip.examples, trip.samples, trip.countPunctuation);
+  let number = 0;
+  for await (const sentence of asAsync(items.sentences)) {
+    number++;
+    const id = itemName(sentence, number);
+    const problem = runner.add(sentence, id);
+    if (problem) {
+      leftOut.push(id);
+      report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, number)}: ${problem}; left out`, sentence));
+    }
+  }
+  return { report: runner.report(), samples: runner.samples, leftOut };
+}
+
+/** What heads are scored with, besides the conversion options. */
+export const scoreSchema = z.strictObject({
+  /** Count punctuation in UAS and LAS; left out by default (common practice). */
+  countPunctuation: z.boolean().default(false),
+  /** Gold words not to score, by a MISC key and its values (`{ key: 'Align', values: ['absorbed', 'extra'] }`). */
+  unscored: z.strictObject({ key: z.string().min(1), values: z.array(z.string()).min(1) }).optional(),
+});
+
+/** The scores of a conversion against gold dependencies, and how trees and gold were paired. */
+export interface HeadScore extends ConversionScore {
+  pairing: PairingTally;
+}
+
+/**
+ * Converts trees and scores them against gold dependency sentences given in
+ * the same order: UAS, LAS, UPOS and features, beside the oracle of head
+ * percolation, with the errors by phrase and table step, as `treebridge heads
+ * score` does. Trees and gold are paired in order (trees without words take
+ * none); pairs whose words differ are reported and left out.
+ */
+export async function scoreHeads(
+  trees: Stream<Tree>,
+  gold: Stream<DependencySentence>,
+  options: ConversionOptions & z.input<typeof scoreSchema>,
+  report: Report = () => undefined,
+): Promise<HeadScore> {
+  const { countPunctuation, unscored, ...conversion } = options;
+  const score = checkOptions(scoreSchema, { countPunctuation, unscored });
+  const { settings } = resolveConversionOptions(conversion);
+  const pairing = emptyTally();
+  const skip = score.unscored ? unscoredTest(score.unscored.key, score.unscored.values) : undefined;
+  const result = await scoreConversion(asAsync(trees), asAsync(gold), settings, report, score.countPunctuation, pairing, skip);
+  return { ...result, pairing };
+}
+
+/** A test for gold words whose MISC has `key` with one of the values. */
+export function unscoredTest(key: string, values: readonly string[]): (word: DependencyWord) => boolean {
+  const wanted = new Set(values);
+  return (word) => word.misc.split('|').some((part) => part.startsWith(key + '=') && wanted.has(part.slice(key.length + 1)));
+}
+
+/** What a head table is learned with. */
+export const suggestSchema = z.strictObject({
+  /** The table to build on, and keep where the data does not improve on it. */
+  base: z.string().min(1).default('generic'),
+  /** The new table's name. */
+  name: z.string().regex(/^[A-Za-z0-9._-]+$/).default('suggested'),
+  /** Fewest phrases of a category to change its block. */
+  minimumPhrases: z.number().int().min(1).default(30),
+  /** Least gain, as a share of the phrases, to change a block. */
+  minimumGain: z.number().min(0).max(1).default(0.01),
+  /** How the base table is written in the new one (`builds-on …`); default its name as given. */
+  baseReference: z.string().optional(),
+  /** The base table's text, when the new table replaces its base's file and so cannot build on it. */
+  inlineBase: z.string().optional(),
+});
+
+/** A learned head table: its text, ready to write, and the blocks it changed or kept. */
+export interface SuggestedTable {
+  text: string;
+  sentences: number;
+  changed: LearnedBlock[];
+  kept: LearnedBlock[];
+  pairing: PairingTally;
+}
+
+/**
+ * Learns from gold dependencies which child heads each phrase, and writes a
+ * head table that builds on a base and replaces the blocks the data
+ * improves, each with its support, as `treebridge heads suggest` does.
+ */
+export async function suggestHeads(
+  trees: Stream<Tree>,
+  gold: Stream<DependencySentence>,
+  options: z.input<typeof suggestSchema> & Pick<ConversionOptions, 'traces' | 'coordination'>,
+  report: Report = () => undefined,
+): Promise<SuggestedTable> {
+  const { traces, coordination, ...rest } = options;
+  const learning = checkOptions(suggestSchema, rest);
+  const { settings } = resolveConversionOptions({ heads: learning.base, traces, coordination, punctuation: 'phrase' });
+  const pairing = emptyTally();
+  const collected = await collectPhrases(asAsync(trees), asAsync(gold), settings, report, pairing);
+  const { changed, kept } = suggestBlocks(collected.samples, settings.heads, { minimumPhrases: learning.minimumPhrases, minimumGain: learning.minimumGain });
+  const text = writeSuggestedTable(learning.name, learning.baseReference ?? learning.base, collected.sentences, changed, kept, learning.inlineBase) + '\n';
+  return { text, sentences: collected.sentences, changed, kept, pairing };
+}
