@@ -11,7 +11,8 @@ import { insertTraces } from '../traces/insert-traces.js';
 import { bracketOptionsSchema, resolveBracketOptions } from './brackets.js';
 import { checkOptions, conversionOptionsSchema, resolveConversionOptions, type ConversionOptions } from './options.js';
 
-type Stream<T> = AsyncIterable<T> | Iterable<T>;
+/** Items that come one at a time: an array, a generator, or an async one (a reader). */
+export type Stream<T> = AsyncIterable<T> | Iterable<T>;
 
 async function* asAsync<T>(items: Stream<T>): AsyncGenerator<T> {
   yield* items;

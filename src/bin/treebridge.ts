@@ -1,5 +1,5 @@
 #!/usr/bin/env -S node --min-semi-space-size=16
-import { runCli } from '../cli/run-cli.js';
+import { runCli } from '../cli/index.js';
 
 // A reader that closes the pipe early (`| head`) is not an error of ours: what is written after it
 // is dropped (the command's Output does so), and the command runs on to its exit code.

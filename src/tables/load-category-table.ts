@@ -34,10 +34,11 @@ const keys = ['upos', 'xpos', 'relation', 'has'] as const;
  * Reads a category table (`headrules/NAME.categories`): which phrase a word
  * projects, by its UPOS and XPOS, its own relation and the relations of its
  * dependents. Same statement syntax as head and label tables:
- * `category S upos=VERB,AUX has=nsubj,csubj`, `otherwise X`.
+ * `category S upos=VERB,AUX has=nsubj,csubj`, `otherwise X`. By shipped name or
+ * path, or, given `text`, from that text.
  */
-export function loadCategoryTable(nameOrPath: string): CategoryTable {
-  const path = requireTable(nameOrPath, 'categories');
+export function loadCategoryTable(nameOrPath: string, text?: string): CategoryTable {
+  const path = text === undefined ? requireTable(nameOrPath, 'categories') : nameOrPath;
   const fail = (line: number, column: number, message: string, code: Diagnostic['code'] = 'table-invalid'): Diagnostic => ({
     code,
     severity: 'error',
@@ -49,7 +50,7 @@ export function loadCategoryTable(nameOrPath: string): CategoryTable {
   });
   let statements: StatementSyntax[];
   try {
-    statements = parse(readTableText(path, 'categories'));
+    statements = parse(text ?? readTableText(path, 'categories'));
   } catch (error) {
     if (!(error instanceof GrammarError)) throw error;
     throw new TableError([fail(error.location.start.line, error.location.start.column, 'this line is not a statement', 'table-syntax')]);

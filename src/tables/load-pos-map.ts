@@ -44,7 +44,8 @@ interface FeatureLine {
   feats: Map<string, string>;
 }
 
-interface ContextRule {
+/** A rule that decides a word's UPOS (and features) by where the conversion put it. */
+export interface ContextRule {
   upos: string;
   feats: Map<string, string>;
   conditions: Array<(context: WordContext) => boolean>;

@@ -15,14 +15,18 @@ export function resolveTable(nameOrPath: string, kind: TableKind, from?: string)
   return findTable(nameOrPath, kind, from);
 }
 
-/** Loads a head table by shipped name or path, with the tables it builds on. */
-export function loadHeadTable(nameOrPath: string): HeadTable {
-  return new TableLoader().head(requireTable(nameOrPath, 'heads'));
+/**
+ * Loads a head table by shipped name or path, with the tables it builds on;
+ * or, given `text`, compiles that text (named `nameOrPath` in problems, its
+ * `builds-on` found beside it or among the shipped tables).
+ */
+export function loadHeadTable(nameOrPath: string, text?: string): HeadTable {
+  return text === undefined ? new TableLoader().head(requireTable(nameOrPath, 'heads')) : new TableLoader().head(nameOrPath, text);
 }
 
-/** Loads a label table by shipped name or path, with the tables it builds on. */
-export function loadLabelTable(nameOrPath: string): LabelTable {
-  return new TableLoader().labels(requireTable(nameOrPath, 'labels'));
+/** Loads a label table by shipped name or path, or compiles `text`; see {@link loadHeadTable}. */
+export function loadLabelTable(nameOrPath: string, text?: string): LabelTable {
+  return text === undefined ? new TableLoader().labels(requireTable(nameOrPath, 'labels')) : new TableLoader().labels(nameOrPath, text);
 }
 
 /**

@@ -1,7 +1,5 @@
 import { Option, type Command } from 'commander';
-import { headWordOf, type ConversionNode } from '../../convert/conversion-tree.js';
-import { findHeads } from '../../convert/find-heads.js';
-import { prepareTree } from '../../convert/prepare-tree.js';
+import { explainHeads as explainHeadsOf } from '../../api/explain.js';
 import { itemName } from '../../diagnostics/diagnostic.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionOptionsOf, conversionSettings } from '../conversion-options.js';
@@ -82,23 +80,14 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
     for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
       number++;
       if (wanted !== undefined && number !== wanted) continue;
-      const prepared = prepareTree(tree, settings.traces);
+      const explanations = explainHeadsOf(tree, { settings, lossless: false });
       const where = tree.position && tree.source ? `${tree.file}:${tree.source.pointAt(tree.position.start).line}` : tree.file;
-      if (!prepared) {
+      if (!explanations) {
         await output.write(`${itemName(tree, number)} (${where}): no words\n\n`);
         continue;
       }
-      findHeads(prepared.root, settings.heads, settings.coordination);
       const lines: string[] = [`${itemName(tree, number)} (${where}), heads by ${settings.heads.name}`];
-      const stack: Array<{ node: ConversionNode; depth: number }> = [{ node: prepared.root, depth: 0 }];
-      while (stack.length > 0) {
-        const { node, depth } = stack.pop()!;
-        if (node.kind !== 'phrase') continue;
-        const head = node.children[node.head!.child]!;
-        const headLabel = head.kind === 'word' ? head.pos : head.label;
-        lines.push(`${'  '.repeat(depth + 1)}${node.label || '(top)'} → ${headLabel} "${headWordOf(node).form}": ${node.head!.reason}`);
-        for (let i = node.children.length - 1; i >= 0; i--) stack.push({ node: node.children[i]!, depth: depth + 1 });
-      }
+      for (const step of explanations) lines.push(`${'  '.repeat(step.depth + 1)}${step.label || '(top)'} → ${step.headLabel} "${step.headWord}": ${step.reason}`);
       await output.write(lines.join('\n') + '\n\n');
       if (wanted !== undefined) break;
     }

@@ -1,0 +1,49 @@
+import { headWordOf, type ConversionNode } from '../convert/conversion-tree.js';
+import { findHeads } from '../convert/find-heads.js';
+import { prepareTree } from '../convert/prepare-tree.js';
+import type { Tree } from '../model/constituency.js';
+import { resolveConversionOptions, type ConversionOptions, type ResolvedConversion } from './options.js';
+
+/** Why one phrase has the head it has. */
+export interface HeadExplanation {
+  /** How deep the phrase stands (the top phrase is 0). */
+  depth: number;
+  /** The phrase's label as written (`''` for the group of several top nodes). */
+  label: string;
+  /** The label (or tag) of the child chosen as head, and the word it leads down to. */
+  headLabel: string;
+  headWord: string;
+  /** The step of the table (or the rule) that chose it: `VP (line 12): left each VP … [matched VP]`. */
+  reason: string;
+  /** The table line of that step, when a step chose it. */
+  line?: number;
+}
+
+/**
+ * For each phrase of a tree, outermost first, the head chosen and the step of
+ * the head table that chose it, as `treebridge heads explain` shows.
+ * Undefined for a tree without words.
+ */
+export function explainHeads(tree: Tree, options: ConversionOptions | ResolvedConversion): HeadExplanation[] | undefined {
+  const { settings } = 'settings' in options ? options : resolveConversionOptions(options);
+  const prepared = prepareTree(tree, settings.traces);
+  if (!prepared) return undefined;
+  findHeads(prepared.root, settings.heads, settings.coordination);
+  const explanations: HeadExplanation[] = [];
+  const stack: Array<{ node: ConversionNode; depth: number }> = [{ node: prepared.root, depth: 0 }];
+  while (stack.length > 0) {
+    const { node, depth } = stack.pop()!;
+    if (node.kind !== 'phrase') continue;
+    const head = node.children[node.head!.child]!;
+    explanations.push({
+      depth,
+      label: node.label,
+      headLabel: head.kind === 'word' ? head.pos : head.label,
+      headWord: headWordOf(node).form,
+      reason: node.head!.reason,
+      ...(node.head!.line === undefined ? {} : { line: node.head!.line }),
+    });
+    for (let i = node.children.length - 1; i >= 0; i--) stack.push({ node: node.children[i]!, depth: depth + 1 });
+  }
+  return explanations;
+}
