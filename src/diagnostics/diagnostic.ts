@@ -1,6 +1,7 @@
 import type { DiagnosticCode } from './codes.js';
 import { diagnosticCodes } from './codes.js';
 import type { LineIndex } from '../model/line-index.js';
+import type { Point } from '../model/position.js';
 
 /** How bad a problem is: an error stops a tree from being read; a warning does not. */
 export type Severity = 'error' | 'warning';
@@ -18,12 +19,18 @@ export interface Diagnostic {
   message: string;
   /** The file as the user named it (`-` for standard input). */
   file: string;
-  /** Offset of the problem in the file (see Position). */
+  /** Offset where the problem starts in the file (see Position). */
   offset: number;
-  /** 1-based line. */
+  /** 1-based line where the problem starts. */
   line: number;
-  /** 1-based column. */
+  /** 1-based column where the problem starts. */
   column: number;
+  /**
+   * Just past the problem: the end of the node, field or token it is about.
+   * Equal to the start when the problem is a place rather than a stretch
+   * (a missing bracket at the end of a file).
+   */
+  end: Point;
   /** The source line holding the problem, for the caret excerpt; absent when unknown. */
   excerpt?: { text: string; column: number };
   /** Further lines of explanation: where a related node stands, what to do. */
@@ -33,14 +40,20 @@ export interface Diagnostic {
 /** Where passes send what they find. */
 export type Report = (diagnostic: Diagnostic) => void;
 
-/** Builds a diagnostic at a file offset, taking line, column and excerpt from the index that covers it. */
+/**
+ * Builds a diagnostic at a file offset, taking line, column and excerpt from
+ * the index that covers it. Without `end` the problem covers the token that
+ * starts there: up to the next white space, at least one character, within
+ * its line.
+ */
 export function diagnose(
   code: DiagnosticCode,
   message: string,
-  where: { file: string; offset: number; lines: LineIndex },
+  where: { file: string; offset: number; end?: number; lines: LineIndex },
   notes?: string[],
 ): Diagnostic {
   const point = where.lines.pointAt(where.offset);
+  const end = where.end ?? tokenEnd(where.lines, where.offset);
   const diagnostic: Diagnostic = {
     code,
     severity: diagnosticCodes[code].severity,
@@ -49,10 +62,61 @@ export function diagnose(
     offset: where.offset,
     line: point.line,
     column: point.column,
+    end: end <= where.offset ? point : where.lines.pointAt(end),
     excerpt: where.lines.lineAt(where.offset),
   };
   if (notes && notes.length > 0) diagnostic.notes = notes;
   return diagnostic;
+}
+
+/**
+ * Offset just past the token at `offset`: a bracket alone, else the run of
+ * characters up to white space, a bracket or the end of the line.
+ */
+function tokenEnd(lines: LineIndex, offset: number): number {
+  const text = lines.text;
+  const from = offset - lines.start.offset;
+  if (from < 0 || from >= text.length || text[from] === '\n' || text[from] === '\r') return offset;
+  let to = from + 1;
+  if (text[from] !== '(' && text[from] !== ')') while (to < text.length && !/[\s()]/.test(text[to]!)) to++;
+  return lines.start.offset + to;
+}
+
+/** Where each line of a text starts, for diagnostics about small texts held whole (tables). */
+export function lineOffsets(lines: readonly string[]): number[] {
+  const offsets: number[] = [];
+  let offset = 0;
+  for (const line of lines) {
+    offsets.push(offset);
+    offset += line.length + 1;
+  }
+  return offsets;
+}
+
+/**
+ * A diagnostic about one line of a small text held whole (a table): the line's
+ * text, number and offset, and the column where the problem starts. Without
+ * `length` the problem covers the token there (at least one character).
+ */
+export function diagnoseLine(
+  code: DiagnosticCode,
+  message: string,
+  where: { file: string; text: string; line: number; lineOffset: number; column: number; length?: number },
+): Diagnostic {
+  const text = where.text.replace(/\r$/, '');
+  const length = where.length ?? Math.max(1, /^\S*/.exec(text.slice(where.column - 1))![0].length);
+  const offset = where.lineOffset + where.column - 1;
+  return {
+    code,
+    severity: diagnosticCodes[code].severity,
+    message,
+    file: where.file,
+    offset,
+    line: where.line,
+    column: where.column,
+    end: { offset: offset + length, line: where.line, column: where.column + length },
+    excerpt: { text, column: 1 },
+  };
 }
 
 /** Something read from a file that a diagnostic can point at as a whole: a tree, a sentence. */
@@ -68,8 +132,8 @@ export interface Located {
  * it is still reported rather than lost.
  */
 export function diagnoseItem(code: DiagnosticCode, message: string, item: Located, notes?: string[]): Diagnostic {
-  if (item.source && item.position) return diagnose(code, message, { file: item.file ?? '-', offset: item.position.start, lines: item.source }, notes);
-  const diagnostic: Diagnostic = { code, severity: diagnosticCodes[code].severity, message, file: item.file ?? '-', offset: 0, line: 1, column: 1 };
+  if (item.source && item.position) return diagnose(code, message, { file: item.file ?? '-', offset: item.position.start, end: item.position.end, lines: item.source }, notes);
+  const diagnostic: Diagnostic = { code, severity: diagnosticCodes[code].severity, message, file: item.file ?? '-', offset: 0, line: 1, column: 1, end: { offset: 0, line: 1, column: 1 } };
   if (notes && notes.length > 0) diagnostic.notes = notes;
   return diagnostic;
 }

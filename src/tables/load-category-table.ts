@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
 import { valueTest } from './label-pattern.js';
 import { readTableText, requireTable, TableError } from './table-source.js';
@@ -39,18 +40,14 @@ const keys = ['upos', 'xpos', 'relation', 'has'] as const;
  */
 export function loadCategoryTable(nameOrPath: string, text?: string): CategoryTable {
   const path = text === undefined ? requireTable(nameOrPath, 'categories') : nameOrPath;
-  const fail = (line: number, column: number, message: string, code: Diagnostic['code'] = 'table-invalid'): Diagnostic => ({
-    code,
-    severity: 'error',
-    message,
-    file: path,
-    offset: 0,
-    line,
-    column,
-  });
+  const source = text ?? readTableText(path, 'categories');
+  const lines = source.split('\n');
+  const offsets = lineOffsets(lines);
+  const fail = (line: number, column: number, message: string, code: Diagnostic['code'] = 'table-invalid'): Diagnostic =>
+    diagnoseLine(code, message, { file: path, text: lines[line - 1] ?? '', line, lineOffset: offsets[line - 1] ?? 0, column });
   let statements: StatementSyntax[];
   try {
-    statements = parse(text ?? readTableText(path, 'categories'));
+    statements = parse(source);
   } catch (error) {
     if (!(error instanceof GrammarError)) throw error;
     throw new TableError([fail(error.location.start.line, error.location.start.column, 'this line is not a statement', 'table-syntax')]);

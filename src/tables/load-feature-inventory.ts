@@ -1,5 +1,5 @@
-import { diagnosticCodes } from '../diagnostics/codes.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import { readTableText, requireTable, TableError } from './table-source.js';
 
 /** Features and their values; a feature with no values listed admits any value. */
@@ -13,23 +13,24 @@ export type FeatureInventory = Map<string, Set<string> | undefined>;
 export function loadFeatureInventory(nameOrPath: string, into: FeatureInventory = new Map()): FeatureInventory {
   const path = requireTable(nameOrPath, 'features');
   const problems: Diagnostic[] = [];
-  readTableText(path, 'features')
-    .split('\n')
-    .forEach((raw, i) => {
-      const line = raw.replace(/\r$/, '');
-      if (/^\s*(#|$)/.test(line)) return;
-      const [name, ...values] = line.trim().split(/\s+/);
-      if (!/^[A-Z][A-Za-z0-9]*$/.test(name!)) {
-        problems.push({ code: 'table-invalid', severity: diagnosticCodes['table-invalid'].severity, message: `"${name}" is not a feature name (capitalised letters and digits)`, file: path, offset: 0, line: i + 1, column: 1, excerpt: { text: line, column: 1 } });
-        return;
-      }
-      if (values.length === 0) into.set(name!, undefined);
-      else {
-        const known = into.get(name!) ?? new Set<string>();
-        for (const value of values) known.add(value);
-        into.set(name!, known);
-      }
-    });
+  const lines = readTableText(path, 'features').split('\n');
+  const offsets = lineOffsets(lines);
+  lines.forEach((raw, i) => {
+    const line = raw.replace(/\r$/, '');
+    if (/^\s*(#|$)/.test(line)) return;
+    const [name, ...values] = line.trim().split(/\s+/);
+    if (!/^[A-Z][A-Za-z0-9]*$/.test(name!)) {
+      const column = line.indexOf(name!) + 1;
+      problems.push(diagnoseLine('table-invalid', `"${name}" is not a feature name (capitalised letters and digits)`, { file: path, text: line, line: i + 1, lineOffset: offsets[i]!, column }));
+      return;
+    }
+    if (values.length === 0) into.set(name!, undefined);
+    else {
+      const known = into.get(name!) ?? new Set<string>();
+      for (const value of values) known.add(value);
+      into.set(name!, known);
+    }
+  });
   if (problems.length > 0) throw new TableError(problems);
   return into;
 }

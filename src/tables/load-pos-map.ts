@@ -1,5 +1,6 @@
-import { diagnosticCodes, type DiagnosticCode } from '../diagnostics/codes.js';
+import type { DiagnosticCode } from '../diagnostics/codes.js';
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
+import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import type { Candidate, Matcher } from './label-pattern.js';
 import { compilePattern, globTest } from './label-pattern.js';
 import { findTable, readTableText, requireTable, TableError } from './table-source.js';
@@ -145,6 +146,8 @@ const CONDITION_KEYS = ['pos', 'form', 'lemma', 'relation', 'dependent', 'head',
 /** One line of a word table, split into words with their columns. */
 interface Line {
   number: number;
+  /** Where the line starts in its file. */
+  offset: number;
   text: string;
   words: Array<{ text: string; column: number }>;
 }
@@ -297,16 +300,18 @@ function splitPatterns(text: string): string[] {
 }
 
 function splitLines(text: string): Line[] {
-  return text.split('\n').map((raw, i) => {
+  const raws = text.split('\n');
+  const offsets = lineOffsets(raws);
+  return raws.map((raw, i) => {
     const lineText = raw.replace(/\r$/, '');
     const words: Line['words'] = [];
     if (!/^\s*#/.test(lineText)) for (const match of lineText.matchAll(/\S+/g)) words.push({ text: match[0], column: match.index + 1 });
-    return { number: i + 1, text: lineText, words };
+    return { number: i + 1, offset: offsets[i]!, text: lineText, words };
   });
 }
 
 function problem(code: DiagnosticCode, file: string, line: Line, column: number, message: string): Diagnostic {
-  return { code, severity: diagnosticCodes[code].severity, message, file, offset: 0, line: line.number, column, excerpt: { text: line.text, column: 1 } };
+  return diagnoseLine(code, message, { file, text: line.text, line: line.number, lineOffset: line.offset, column });
 }
 
 /** `Case=Dat|Number=Plur` (or `_`) as a map; a message when it is not features. */

@@ -1,6 +1,6 @@
 import type { Diagnostic } from '../diagnostics/diagnostic.js';
 import type { DiagnosticCode } from '../diagnostics/codes.js';
-import { diagnosticCodes } from '../diagnostics/codes.js';
+import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import { z } from 'zod';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
 import { compilePattern, valueTest, type Candidate, type Matcher } from './label-pattern.js';
@@ -71,6 +71,8 @@ interface Link {
   file: string;
   /** The file's lines, split once, for excerpts. */
   lines: string[];
+  /** Where each line starts, found when a problem needs it. */
+  offsets?: number[];
   statements: StatementSyntax[];
 }
 
@@ -386,8 +388,9 @@ class TableLoader {
       return;
     }
     const { file, lines } = this.link;
-    const text = (lines[at.line - 1] ?? '').replace(/\r$/, '');
-    this.problems.push({ code, severity: diagnosticCodes[code].severity, message, file, offset: 0, line: at.line, column: at.column, excerpt: { text, column: 1 } });
+    this.link.offsets ??= lineOffsets(lines);
+    const text = lines[at.line - 1] ?? '';
+    this.problems.push(diagnoseLine(code, message, { file, text, line: at.line, lineOffset: this.link.offsets[at.line - 1] ?? 0, column: at.column }));
   }
 
   private finish(): void {

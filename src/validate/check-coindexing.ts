@@ -25,7 +25,7 @@ export function checkCoindexing(tree: Tree, report: Report): void {
   }
   const warn = (code: DiagnosticCode, node: ConstituentNode, message: string, notes?: string[]) => {
     if (!tree.source || !node.position) return;
-    report(diagnose(code, message, { file: tree.file ?? '-', offset: node.position.start, lines: tree.source }, notes));
+    report(diagnose(code, message, { file: tree.file ?? '-', offset: node.position.start, end: node.position.end, lines: tree.source }, notes));
   };
   const at = (node: ConstituentNode) => {
     const point = node.position && tree.source?.pointAt(node.position.start);

@@ -23,6 +23,7 @@ export class SentenceIdCheck {
       const missing = diagnose('missing-id', 'tree has no identifier, unlike other trees of its file', {
         file,
         offset: tree.position.start,
+        end: tree.position.end,
         lines: tree.source,
       });
       if (this.fileHasIds) this.report(missing);
@@ -35,6 +36,7 @@ export class SentenceIdCheck {
       this.waiting = [];
     }
     const offset = tree.idPosition?.start ?? tree.position.start;
+    const end = tree.idPosition?.end ?? tree.position.end;
     const here = tree.source.pointAt(offset);
     const first = this.seen.get(tree.id);
     if (first === undefined) {
@@ -42,7 +44,7 @@ export class SentenceIdCheck {
       return;
     }
     this.report(
-      diagnose('duplicate-id', `identifier "${tree.id}" was already used`, { file, offset, lines: tree.source }, [
+      diagnose('duplicate-id', `identifier "${tree.id}" was already used`, { file, offset, end, lines: tree.source }, [
         `first used at ${first}`,
       ]),
     );

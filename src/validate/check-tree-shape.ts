@@ -6,7 +6,7 @@ import { isMetaOnly, preterminalsOf } from '../model/traverse.js';
 export function checkTreeShape(tree: Tree, report: Report): number {
   const words = preterminalsOf(tree).length;
   if (!tree.source || !tree.position) return words;
-  const where = { file: tree.file ?? '-', offset: tree.position.start, lines: tree.source };
+  const where = { file: tree.file ?? '-', offset: tree.position.start, end: tree.position.end, lines: tree.source };
   const sentenceNodes = tree.children.filter((child) => child.type !== 'meta');
   if (sentenceNodes.length > 1) {
     const labels = sentenceNodes.map((node) => (node.type === 'preterminal' ? node.pos : node.type === 'phrase' ? node.label.category : node.text));

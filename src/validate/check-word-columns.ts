@@ -15,10 +15,13 @@ export function checkWordColumns(sentence: DependencySentence, report: Report, f
   if (!sentence.source) return;
   const ids = new Set<string>(['0']);
   for (const line of sentence.lines) if (line.type !== 'multiword') ids.add(line.id);
-  const at = (line: DependencyWord | EmptyNode, field: number, offsetInField: number, code: DiagnosticCode, message: string) => {
+  // A problem covers `length` characters from `offsetInField` (one pair of FEATS or DEPS), else the whole column.
+  const at = (line: DependencyWord | EmptyNode, field: number, offsetInField: number, code: DiagnosticCode, message: string, length?: number) => {
     if (!line.position) return;
     const fields = [line.id, line.form, line.lemma, line.upos, line.xpos, line.feats, line.head, line.deprel, line.deps, line.misc];
-    report(diagnose(code, message, { file: sentence.file ?? '-', offset: line.position.start + fieldColumn(fields, field) - 1 + offsetInField, lines: sentence.source! }));
+    const offset = line.position.start + fieldColumn(fields, field) - 1 + offsetInField;
+    const end = offset + (length ?? fields[field]!.length - offsetInField);
+    report(diagnose(code, message, { file: sentence.file ?? '-', offset, end, lines: sentence.source! }));
   };
   for (const line of sentence.lines) {
     if (line.type === 'multiword') continue;
@@ -28,7 +31,7 @@ export function checkWordColumns(sentence: DependencySentence, report: Report, f
       for (const pair of line.feats.split('|')) {
         const equals = pair.indexOf('=');
         const problem = equals > 0 ? featureProblem(features, pair.slice(0, equals), pair.slice(equals + 1)) : undefined;
-        if (problem) at(line, 5, offset, 'unknown-feature', problem);
+        if (problem) at(line, 5, offset, 'unknown-feature', problem, pair.length);
         offset += pair.length + 1;
       }
     }
@@ -41,8 +44,8 @@ export function checkWordColumns(sentence: DependencySentence, report: Report, f
           offset += pair.length + 1;
           continue;
         }
-        if (head === line.id) at(line, 8, offset, 'deps-target', `DEPS of ${line.id} points at ${line.id} itself`);
-        else if (head !== '' && !ids.has(head)) at(line, 8, offset, 'deps-target', `DEPS head ${head} is no word or empty node of this sentence`);
+        if (head === line.id) at(line, 8, offset, 'deps-target', `DEPS of ${line.id} points at ${line.id} itself`, pair.length);
+        else if (head !== '' && !ids.has(head)) at(line, 8, offset, 'deps-target', `DEPS head ${head} is no word or empty node of this sentence`, pair.length);
         offset += pair.length + 1;
       }
     }

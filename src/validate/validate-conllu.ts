@@ -85,7 +85,8 @@ export class ConlluValidator {
   private warnAt(sentence: DependencySentence, word: DependencyWord, field: number, message: string): void {
     if (!sentence.source || !word.position) return;
     const fields = [word.id, word.form, word.lemma, word.upos, word.xpos, word.feats, word.head, word.deprel, word.deps, word.misc];
-    const where = { file: sentence.file ?? '-', offset: word.position.start + fieldColumn(fields, field) - 1, lines: sentence.source };
+    const offset = word.position.start + fieldColumn(fields, field) - 1;
+    const where = { file: sentence.file ?? '-', offset, end: offset + fields[field]!.length, lines: sentence.source };
     this.report(diagnose('unknown-relation', message, where));
   }
 }

@@ -279,7 +279,7 @@ export class TreeBuilder implements TreeAssembler {
 
 
   private where(token: number) {
-    return this.at(this.starts[token]!);
+    return { ...this.at(this.starts[token]!), end: this.base + this.ends[token]! };
   }
 
   private at(relative: number) {
