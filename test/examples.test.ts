@@ -74,3 +74,12 @@ describe('the library examples', () => {
     );
   });
 });
+
+describe('the README', () => {
+  it('shows each library example as the file that is run', () => {
+    const readme = readFileSync(join(projectRoot, 'README.md'), 'utf8');
+    const shown = [...readme.matchAll(/<!-- example: ([a-z-]+) -->\n```ts\n([\s\S]*?)```\n/g)];
+    expect(shown.map((match) => match[1])).toEqual(['convert-a-string', 'tweak-a-head-table', 'validate-a-string', 'stats-of-a-file']);
+    for (const [, name, code] of shown) expect(code, name).toBe(exampleSource(name!));
+  });
+});
