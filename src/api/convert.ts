@@ -72,59 +72,90 @@ export async function* convertTrees(
   report: Report = () => undefined,
   tally: ConversionTally = emptyConversionTally(),
 ): AsyncGenerator<DependencySentence> {
-  const { idPrefix, firstNumber, source, ...rest } = options;
-  const naming = checkOptions(namingSchema, { idPrefix, firstNumber, source });
-  const resolved = resolveConversionOptions(checkOptions(conversionOptionsSchema, rest));
-  let file: string | undefined;
-  let number = naming.firstNumber - 1;
-  // Lossless mode holds back one sentence, so that trees without words at the very end can ride on it.
-  let held: DependencySentence | undefined;
-  let wordless: Tree[] = [];
-  for await (const tree of trees) {
+  const converter = new TreeConverter(options, report, tally);
+  for await (const tree of trees) yield* converter.convert(tree);
+  yield* converter.finish();
+}
+
+/**
+ * The conversion of a stream of trees, one tree at a time and without
+ * waiting: what {@link convertTrees} does, for callers that hold trees in
+ * batches and want no promise per tree. `convert` gives the sentences a tree
+ * completes (none, one, or in lossless mode the one held back before it);
+ * `finish` gives what is left when the stream ends.
+ */
+export class TreeConverter {
+  private readonly naming: z.output<typeof namingSchema>;
+  private readonly resolved: ResolvedConversion;
+  private file: string | undefined;
+  private number: number;
+  /** Lossless mode holds back one sentence, so that trees without words at the very end can ride on it. */
+  private held: DependencySentence | undefined;
+  private wordless: Tree[] = [];
+
+  constructor(
+    options: ConversionOptions & NamingOptions,
+    private readonly report: Report = () => undefined,
+    readonly tally: ConversionTally = emptyConversionTally(),
+  ) {
+    const { idPrefix, firstNumber, source, ...rest } = options;
+    this.naming = checkOptions(namingSchema, { idPrefix, firstNumber, source });
+    this.resolved = resolveConversionOptions(checkOptions(conversionOptionsSchema, rest));
+    this.number = this.naming.firstNumber - 1;
+  }
+
+  convert(tree: Tree): DependencySentence[] {
+    const { tally, naming, resolved, report } = this;
     tally.read++;
-    if (tree.file !== file || tally.read === 1) {
-      file = tree.file;
-      number = naming.firstNumber - 1;
+    if (tree.file !== this.file || tally.read === 1) {
+      this.file = tree.file;
+      this.number = naming.firstNumber - 1;
     }
-    number++;
-    const name = file === undefined ? naming.source : basename(file);
+    // A reader's count of the trees of its input names a tree, so that a tree keeps its name whatever
+    // trees before it could not be read, and a piece of a split input numbers as the whole does.
+    const number = (this.number = tree.number === undefined ? this.number + 1 : naming.firstNumber - 1 + tree.number);
+    const name = this.file === undefined ? naming.source : basename(this.file);
     const id = tree.id ?? `${naming.idPrefix ?? (name === undefined ? '' : `${name}-`)}${number}`;
     if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, report);
     const conversion = convertTree(tree, resolved, { id, origin: name === undefined ? undefined : `${name}#${number}` });
     if (!conversion) {
-      if (resolved.lossless) wordless.push(tree);
+      if (resolved.lossless) this.wordless.push(tree);
       else {
         tally.skipped++;
         reportWordlessTree(tree, report);
       }
-      continue;
+      return [];
     }
     const unwritable = unwritableSentenceReason(conversion.sentence);
     if (unwritable) {
       tally.skipped++;
       report(diagnoseItem('unwritable-tree', `tree ${itemName(tree)} cannot be written as CoNLL-U: ${unwritable}`, tree));
-      continue;
+      return [];
     }
     tally.converted++;
-    if (!resolved.lossless) {
-      yield conversion.sentence;
-      continue;
-    }
-    if (held) yield held;
-    held = conversion.sentence;
-    held.comments.push(...wordless.map((t) => carryComment(t, 'before')));
-    tally.carried += wordless.length;
-    wordless = [];
+    if (!resolved.lossless) return [conversion.sentence];
+    const ready = this.held ? [this.held] : [];
+    this.held = conversion.sentence;
+    this.held.comments.push(...this.wordless.map((t) => carryComment(t, 'before')));
+    tally.carried += this.wordless.length;
+    this.wordless = [];
+    return ready;
   }
-  if (held) {
-    held.comments.push(...wordless.map((t) => carryComment(t, 'after')));
-    tally.carried += wordless.length;
-    yield held;
-  } else {
+
+  finish(): DependencySentence[] {
+    const { held, wordless, tally } = this;
+    this.held = undefined;
+    this.wordless = [];
+    if (held) {
+      held.comments.push(...wordless.map((t) => carryComment(t, 'after')));
+      tally.carried += wordless.length;
+      return [held];
+    }
     for (const tree of wordless) {
       tally.skipped++;
-      reportWordlessTree(tree, report);
+      reportWordlessTree(tree, this.report);
     }
+    return [];
   }
 }
 

@@ -204,6 +204,14 @@ export class Output {
   private failure: unknown;
   /** The reader went away (EPIPE): nothing more is written, and that is no failure. */
   private closed = false;
+  /**
+   * Text written but not yet handed to the stream: many small writes cost more
+   * than one large one (each is a call into the stream and, for a file, a
+   * system call), so text leaves in pieces of {@link Output.PIECE} characters.
+   */
+  private pending: string[] = [];
+  private pendingLength = 0;
+  static readonly PIECE = 256 * 1024;
 
   private constructor(
     private readonly stream: Writable,
@@ -245,10 +253,22 @@ export class Output {
     return new Output(createWriteStream(temporary, mode === undefined ? {} : { mode }), path, target, temporary, mode);
   }
 
-  /** Writes text, waiting when the stream asks for it. */
+  /** Writes text, waiting when the stream asks for it; text is gathered into large pieces first. */
   async write(text: string): Promise<void> {
     this.check();
     if (this.closed) return;
+    this.pending.push(text);
+    this.pendingLength += text.length;
+    if (this.pendingLength >= Output.PIECE) await this.flush();
+  }
+
+  /** Hands the gathered text to the stream. */
+  async flush(): Promise<void> {
+    if (this.pendingLength === 0 && this.pending.length === 0) return;
+    const text = this.pending.length === 1 ? this.pending[0]! : this.pending.join('');
+    this.pending = [];
+    this.pendingLength = 0;
+    if (this.closed || text === '') return;
     // Wait for the stream to drain; an error instead is kept by the listener above and thrown below.
     if (!this.stream.write(text)) await drained(this.stream);
     this.check();
@@ -256,6 +276,7 @@ export class Output {
 
   /** Finishes the output: a file is moved into place, keeping the permissions of the file it replaces. */
   async commit(): Promise<void> {
+    await this.flush();
     if (!this.file || !this.target) return;
     await new Promise<void>((resolve) => this.file!.end(() => resolve()));
     this.check();
@@ -276,6 +297,8 @@ export class Output {
 
   /** Abandons the output: a temporary file is removed, the target left as it was. */
   async abandon(): Promise<void> {
+    this.pending = [];
+    this.pendingLength = 0;
     if (!this.file || !this.temporary) return;
     await new Promise<void>((resolve) => this.file!.end(() => resolve()));
     await unlink(this.temporary).catch(() => undefined);

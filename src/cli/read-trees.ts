@@ -42,20 +42,34 @@ export async function* readInputs<T>(
 export type TreeReadOptions = BracketedReadOptions & { from?: TreeFormat };
 
 /** The constituency trees of several inputs, each read as bracketed trees or the XML graph encoding (see formatOf). */
-export function readTreesOf(
+export async function* readTreesOf(
   inputs: Input[],
   options: TreeReadOptions,
   report: Report,
   io: CliIO,
   onInput?: (input: Input) => void,
 ): AsyncGenerator<Tree> {
+  for await (const batch of readTreeBatchesOf(inputs, options, report, io, onInput)) yield* batch;
+}
+
+/**
+ * As {@link readTreesOf}, in batches: the trees one stretch of input
+ * completes, together, so that a consumer spends no promise per tree.
+ */
+export function readTreeBatchesOf(
+  inputs: Input[],
+  options: TreeReadOptions,
+  report: Report,
+  io: CliIO,
+  onInput?: (input: Input) => void,
+): AsyncGenerator<Tree[]> {
   const formats = new Map(inputs.map((input) => [input.name, formatOf(input, options.from)]));
-  const read = async function* (pieces: AsyncIterable<string>, name: string) {
+  const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<Tree[]> {
     if (formats.get(name) === 'xml') {
-      yield* readXmlGraphs(pieces, { file: name }, report);
+      for await (const tree of readXmlGraphs(pieces, { file: name }, report)) yield [tree];
       return;
     }
-    for await (const batch of readBracketedBatches(pieces, { ...options, file: name }, report)) yield* batch;
+    yield* readBracketedBatches(pieces, { ...options, file: name }, report);
   };
   return readInputs(inputs, read, io, onInput);
 }

@@ -1,6 +1,6 @@
 import { convertTree, type ConversionSettings } from '../convert/convert-tree.js';
 import type { ConstituentNode, Tree } from '../model/constituency.js';
-import { nodesBottomUp, nodesTopDown } from '../model/traverse.js';
+import { nodesBottomUp, nodesTopDown, preterminalsOf } from '../model/traverse.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { buildBrackets, type BracketSettings } from '../reverse/build-brackets.js';
 import { treeHeads } from '../analysis/heads.js';
@@ -157,7 +157,7 @@ export class BracketRoundTrip {
     scoreBrackets(this.totals, gold.spans, test.spans);
     // In lossless mode the tree itself must come back: function tags, empty elements and coindices are then not lost.
     if (carried) return rebuilt.tree;
-    const before = { ...this.losses };
+    const lossesBefore = { ...this.losses };
     const note = (kind: LossKind, count = 1) => this.note(kind, id, count);
     this.classify(gold.spans, test.spans, gold.words, this.conversion.heads, note);
     // Same span on both sides, different category.
@@ -169,9 +169,19 @@ export class BracketRoundTrip {
     note('functionTags', gold.spans.filter((s) => s.functions > 0).length);
     note('emptyElements', countNodes(tree, (n) => n.type === 'empty'));
     note('coindexing', countNodes(tree, (n) => (n.type === 'phrase' || n.type === 'empty') && (n.label.coindex !== undefined || n.label.gapIndex !== undefined)));
-    const differing = gold.words.filter((w, i) => w.form !== test.words[i]?.form || w.pos !== test.words[i]?.pos).length + Math.abs(gold.words.length - test.words.length);
+    // A word comes back when it reads as the leaf did, or as the conversion wrote it: a word table
+    // that joins clitic pieces into a multiword token (dropping their `$` marks) changes how a word
+    // is written, not which word it is; escapes such as -LRB- are written back as they were read.
+    const written = dependencies.sentence.lines.filter((line) => line.type === 'word').map((line) => line.form);
+    const before = preterminalsOf(tree);
+    const after = preterminalsOf(rebuilt.tree);
+    const sameWord = (i: number) => {
+      const form = after[i]?.word.form;
+      return form === before[i]!.word.form || (written.length === before.length && form === written[i]);
+    };
+    const differing = before.filter((p, i) => !sameWord(i) || p.pos !== after[i]?.pos).length + Math.abs(before.length - after.length);
     note('wordsOrPos', differing);
-    this.keepSample(id, tree, dependencies.sentence, rebuilt.tree, gold.spans, test.spans, before);
+    this.keepSample(id, tree, dependencies.sentence, rebuilt.tree, gold.spans, test.spans, lossesBefore);
     return rebuilt.tree;
   }
 

@@ -139,6 +139,12 @@ export interface Tree {
   position?: Position;
   /** The file the tree was read from, as named by the caller. */
   file?: string;
+  /**
+   * The tree's place among the trees of its input, from 1, counting those that
+   * could not be read: the fifth top-level bracket of a file is tree 5 even when
+   * the third is broken. Filled by the readers; names trees without identifier.
+   */
+  number?: number;
   /** Lines and columns of the tree's source text, for diagnostics; filled by the reader. */
   source?: LineIndex;
   /** Terminals carry `order` and phrases may have gaps (see "Discontinuous trees" above). */

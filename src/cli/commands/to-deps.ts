@@ -1,5 +1,5 @@
 import { Option, type Command } from 'commander';
-import { convertTrees, emptyConversionTally } from '../../api/convert.js';
+import { emptyConversionTally, TreeConverter } from '../../api/convert.js';
 import { writeSentence } from '../../formats/conllu/write-conllu.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { conversionOptionsOf, addConversionOptions, resolveConversion } from '../conversion-options.js';
@@ -7,7 +7,7 @@ import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../pr
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
-import { readTreesOf } from '../read-trees.js';
+import { readTreeBatchesOf } from '../read-trees.js';
 import { wholeNumber } from '../whole-number.js';
 
 export function registerToDeps(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -35,11 +35,15 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   const problems = new ProblemPrinter(io, listingOf(options));
   const tally = emptyConversionTally();
   try {
-    const trees = readTreesOf(inputs, bracketedReadOptions(options), problems.report, io);
     const naming = { idPrefix: options.idPrefix as string | undefined, firstNumber: options.firstNumber as number };
-    for await (const sentence of convertTrees(trees, { ...conversionOptionsOf(options), heads: resolved.settings.heads, labels: resolved.settings.labels, posMap: resolved.settings.upos, ...naming }, problems.report, tally)) {
-      await output.write(writeSentence(sentence));
+    const converter = new TreeConverter({ ...conversionOptionsOf(options), heads: resolved.settings.heads, labels: resolved.settings.labels, posMap: resolved.settings.upos, ...naming }, problems.report, tally);
+    // A batch at a time: the trees one stretch of input completes are converted and written without waiting between them.
+    for await (const trees of readTreeBatchesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
+      let text = '';
+      for (const tree of trees) for (const sentence of converter.convert(tree)) text += writeSentence(sentence);
+      await output.write(text);
     }
+    for (const sentence of converter.finish()) await output.write(writeSentence(sentence));
     await output.commit();
   } catch (error) {
     await output.abandon();

@@ -203,6 +203,7 @@ export class TreeBuilder implements TreeAssembler {
       idPosition: undefined,
       position: this.span(open, close),
       file: this.file,
+      number: this.batch.trees[this.current]!.number,
       source: this.lines,
     };
   }

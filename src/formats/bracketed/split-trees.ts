@@ -36,6 +36,8 @@ export interface TreeChunk {
   lines: LineIndex;
   /** Index of the chunk's first token in its batch's token table. */
   firstToken: number;
+  /** The tree's place among the top-level brackets of the input, from 1 (see Tree.number). */
+  number: number;
 }
 
 /** The trees finished by one piece of input, and their tokens; valid until the next piece. */
@@ -94,6 +96,8 @@ export class TreeSplitter {
   /** Where the word being scanned starts, relative to the tree; -1 between words. */
   private wordStart = -1;
   private readonly tokens = new TokenTable();
+  /** Top-level brackets opened so far, broken trees included: the number of the current tree. */
+  private begun = 0;
   /** Trees finished since the last batch left. */
   private finished: TreeChunk[] = [];
   private first = true;
@@ -358,6 +362,7 @@ export class TreeSplitter {
   }
 
   private openTree(index: number): void {
+    this.begun++;
     this.depth = 1;
     this.treeStart = index;
     const offset = this.bufferOffset + index;
@@ -392,7 +397,7 @@ export class TreeSplitter {
         line: start.line,
         column: start.column - prefix.length,
       });
-      this.finished.push({ text, offset: start.offset, lines, firstToken: tokens.currentTreeStart });
+      this.finished.push({ text, offset: start.offset, lines, firstToken: tokens.currentTreeStart, number: this.begun });
       tokens.commitTree();
     }
     this.treeStart = -1;
