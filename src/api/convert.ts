@@ -5,7 +5,7 @@ import { reportWordlessTree } from '../convert/report-wordless-tree.js';
 import { diagnoseItem, itemName, type Report } from '../diagnostics/diagnostic.js';
 import { readBracketedText } from '../formats/bracketed/read-bracketed.js';
 import type { BracketedReadOptions } from '../formats/bracketed/read-options.js';
-import { unwritableSentenceReason, writeSentence } from '../formats/conllu/write-conllu.js';
+import { writeCheckedSentence, writeSentence } from '../formats/conllu/write-conllu.js';
 import { carryBrackets } from '../lossless/carry-brackets.js';
 import { carryComment } from '../lossless/carry-wordless-trees.js';
 import type { Tree } from '../model/constituency.js';
@@ -92,6 +92,8 @@ export class TreeConverter {
   /** Lossless mode holds back one sentence, so that trees without words at the very end can ride on it. */
   private held: DependencySentence | undefined;
   private wordless: Tree[] = [];
+  /** The text of each sentence as written when it was checked, so that it is not written twice. */
+  private readonly written = new WeakMap<DependencySentence, string>();
 
   constructor(
     options: ConversionOptions & NamingOptions,
@@ -126,12 +128,14 @@ export class TreeConverter {
       }
       return [];
     }
-    const unwritable = unwritableSentenceReason(conversion.sentence);
-    if (unwritable) {
+    const checked = writeCheckedSentence(conversion.sentence);
+    if ('problem' in checked) {
       tally.skipped++;
-      report(diagnoseItem('unwritable-tree', `tree ${itemName(tree)} cannot be written as CoNLL-U: ${unwritable}`, tree));
+      report(diagnoseItem('unwritable-tree', `tree ${itemName(tree)} cannot be written as CoNLL-U: ${checked.problem}`, tree));
       return [];
     }
+    // A sentence held back in lossless mode gains comments before it leaves: its text is written then.
+    if (!resolved.lossless) this.written.set(conversion.sentence, checked.text);
     tally.converted++;
     if (!resolved.lossless) return [conversion.sentence];
     const ready = this.held ? [this.held] : [];
@@ -140,6 +144,14 @@ export class TreeConverter {
     tally.carried += this.wordless.length;
     this.wordless = [];
     return ready;
+  }
+
+  /** As {@link convert}, the sentences written as CoNLL-U. */
+  convertToText(tree: Tree): string {
+    const sentences = this.convert(tree);
+    if (sentences.length === 0) return '';
+    if (sentences.length === 1) return this.written.get(sentences[0]!) ?? writeSentence(sentences[0]!);
+    return sentences.map((sentence) => this.written.get(sentence) ?? writeSentence(sentence)).join('');
   }
 
   finish(): DependencySentence[] {

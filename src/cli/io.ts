@@ -207,9 +207,11 @@ export class Output {
   /**
    * Text written but not yet handed to the stream: many small writes cost more
    * than one large one (each is a call into the stream and, for a file, a
-   * system call), so text leaves in pieces of {@link Output.PIECE} characters.
+   * system call), so text leaves in pieces of {@link Output.PIECE} bytes. Each
+   * text is encoded as it comes: joining many strings built by concatenation
+   * first costs more than encoding them one by one.
    */
-  private pending: string[] = [];
+  private pending: Buffer[] = [];
   private pendingLength = 0;
   static readonly PIECE = 256 * 1024;
 
@@ -257,20 +259,22 @@ export class Output {
   async write(text: string): Promise<void> {
     this.check();
     if (this.closed) return;
-    this.pending.push(text);
-    this.pendingLength += text.length;
+    if (text === '') return;
+    const bytes = Buffer.from(text, 'utf8');
+    this.pending.push(bytes);
+    this.pendingLength += bytes.length;
     if (this.pendingLength >= Output.PIECE) await this.flush();
   }
 
   /** Hands the gathered text to the stream. */
   async flush(): Promise<void> {
-    if (this.pendingLength === 0 && this.pending.length === 0) return;
-    const text = this.pending.length === 1 ? this.pending[0]! : this.pending.join('');
+    if (this.pending.length === 0) return;
+    const bytes = this.pending.length === 1 ? this.pending[0]! : Buffer.concat(this.pending, this.pendingLength);
     this.pending = [];
     this.pendingLength = 0;
-    if (this.closed || text === '') return;
+    if (this.closed) return;
     // Wait for the stream to drain; an error instead is kept by the listener above and thrown below.
-    if (!this.stream.write(text)) await drained(this.stream);
+    if (!this.stream.write(bytes)) await drained(this.stream);
     this.check();
   }
 

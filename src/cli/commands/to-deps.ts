@@ -40,7 +40,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
     // A batch at a time: the trees one stretch of input completes are converted and written without waiting between them.
     for await (const trees of readTreeBatchesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
       let text = '';
-      for (const tree of trees) for (const sentence of converter.convert(tree)) text += writeSentence(sentence);
+      for (const tree of trees) text += converter.convertToText(tree);
       await output.write(text);
     }
     for (const sentence of converter.finish()) await output.write(writeSentence(sentence));

@@ -2,12 +2,17 @@ import type { DependencySentence } from '../../model/dependency.js';
 
 /** Writes a sentence in CoNLL-U: comments, one line per word, token or empty node, then a blank line. */
 export function writeSentence(sentence: DependencySentence): string {
-  let text = '';
-  for (const comment of sentence.comments) text += `#${comment.text}\n`;
-  for (const line of sentence.lines) {
-    text += `${line.id}\t${line.form}\t${line.lemma}\t${line.upos}\t${line.xpos}\t${line.feats}\t${line.head}\t${line.deprel}\t${line.deps}\t${line.misc}\n`;
-  }
-  return text + '\n';
+  const parts: string[] = [];
+  for (const comment of sentence.comments) parts.push(`#${comment.text}\n`);
+  for (const line of sentence.lines) parts.push(lineOf(line), '\n');
+  parts.push('\n');
+  return parts.join('');
+}
+
+type Line = DependencySentence['lines'][number];
+
+function lineOf(line: Line): string {
+  return `${line.id}\t${line.form}\t${line.lemma}\t${line.upos}\t${line.xpos}\t${line.feats}\t${line.head}\t${line.deprel}\t${line.deps}\t${line.misc}`;
 }
 
 /** Columns where the format allows spaces: FORM, LEMMA and MISC (UD v2 format specification). */
@@ -24,6 +29,8 @@ export function unwritableSentenceReason(sentence: DependencySentence): string |
     if (/[\n\r]/.test(comment.text)) return `the comment ${JSON.stringify(comment.text.slice(0, 40))} holds a line break`;
   }
   for (const line of sentence.lines) {
+    // One test of the whole line settles nearly every line; only a line that fails it is taken apart.
+    if (WRITABLE_LINE.test(lineOf(line))) continue;
     for (const column of ['id', 'form', 'lemma', 'upos', 'xpos', 'feats', 'head', 'deprel', 'deps', 'misc'] as const) {
       const value = line[column];
       if (value === '') return `word ${line.id} has an empty ${column.toUpperCase()}`;
@@ -33,3 +40,20 @@ export function unwritableSentenceReason(sentence: DependencySentence): string |
   }
   return undefined;
 }
+
+/**
+ * Writes a sentence and checks in the same stroke that it reads back as
+ * itself: the text, or why it cannot be written (see unwritableSentenceReason).
+ */
+export function writeCheckedSentence(sentence: DependencySentence): { text: string } | { problem: string } {
+  const text = writeSentence(sentence);
+  if (WRITABLE_SENTENCE.test(text)) return { text };
+  const problem = unwritableSentenceReason(sentence);
+  return problem === undefined ? { text } : { problem };
+}
+
+/** Ten columns, none empty, none holding a tab or line break; spaces only in FORM, LEMMA and MISC. */
+const WRITABLE_LINE = /^[^\t\n\r ]+\t[^\t\n\r]+\t[^\t\n\r]+(\t[^\t\n\r ]+){6}\t[^\t\n\r]+$/;
+
+/** A whole sentence as writeSentence writes it: comments without carriage returns, then writable lines, then a blank line. */
+const WRITABLE_SENTENCE = /^(#[^\n\r]*\n)*([^\t\n\r ]+\t[^\t\n\r]+\t[^\t\n\r]+(\t[^\t\n\r ]+){6}\t[^\t\n\r]+\n)*\n$/;
