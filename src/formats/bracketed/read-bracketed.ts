@@ -133,7 +133,7 @@ class PieceReader {
   private readonly context: BuildContext;
 
   constructor(
-    private readonly options: ResolvedReadOptions,
+    options: ResolvedReadOptions,
     private readonly report: Report,
   ) {
     this.context = new BuildContext(options, report);
@@ -156,19 +156,25 @@ class PieceReader {
   }
 
   private read(batch: TreeBatch): void {
-    const assembler = new TreeBuilder(batch, this.options.file, this.context);
-    let trees;
-    try {
-      trees = parse(batch.tokens.kinds, { assembler });
-    } catch (error) {
-      // The splitter hands out balanced brackets only, so the grammar accepts every batch; this guards against a change there.
-      if (!(error instanceof GrammarError)) throw error;
-      for (const chunk of batch.trees) {
-        const where = { file: this.options.file, offset: chunk.offset, lines: chunk.lines };
-        this.report(diagnose('bad-bracketing', 'brackets do not form a tree; the tree is skipped', where));
-      }
-      return;
-    }
-    for (const tree of trees) if (tree) this.ready.push(tree);
+    for (const tree of buildBatch(batch, this.context, this.report)) this.ready.push(tree);
   }
+}
+
+/** Builds the trees of one batch cut by the splitter; a tree that cannot be built is reported and left out. */
+export function buildBatch(batch: TreeBatch, context: BuildContext, report: Report): Tree[] {
+  const file = context.options.file;
+  const assembler = new TreeBuilder(batch, file, context);
+  let trees;
+  try {
+    trees = parse(batch.tokens.kinds, { assembler });
+  } catch (error) {
+    // The splitter hands out balanced brackets only, so the grammar accepts every batch; this guards against a change there.
+    if (!(error instanceof GrammarError)) throw error;
+    for (const chunk of batch.trees) {
+      const where = { file, offset: chunk.offset, lines: chunk.lines };
+      report(diagnose('bad-bracketing', 'brackets do not form a tree; the tree is skipped', where));
+    }
+    return [];
+  }
+  return trees.filter((tree): tree is Tree => tree !== undefined);
 }

@@ -1,0 +1,125 @@
+import type { Diagnostic, Report } from '../../diagnostics/diagnostic.js';
+import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
+import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
+import type { ConversionTally, NamingOptions } from '../convert.js';
+import { WorkerPool } from './pool.js';
+import type { ConvertResult, NamedConversionOptions } from './tasks.js';
+
+/** Characters of input per task: enough that sending a task costs little beside converting it. */
+const TASK_SIZE = 64 * 1024;
+/** Characters handed to the cutter at a time, as the reader does (see read-bracketed.ts), so that problems come in the same order. */
+const SLICE = 4 * 1024;
+
+/** What happened, in input order: a problem of the cutting, a batch built, a batch converted. */
+type Event = { kind: 'problem'; diagnostic: Diagnostic } | { kind: 'built'; batch: number } | { kind: 'converted'; batch: number };
+
+/** A run of events and the task converting their batches; the result is awaited in turn. */
+interface Group {
+  events: Event[];
+  result: Promise<ConvertResult> | undefined;
+}
+
+/**
+ * Converts bracketed input to CoNLL-U on worker threads, giving the text,
+ * the problems and the tally that converting it on one thread gives, in the
+ * same order. The main thread reads and cuts the input into batches of trees
+ * (the reader's first half); workers build and convert the batches; results
+ * come back in input order. At most a few tasks per worker are in flight, so
+ * memory does not grow with the input.
+ */
+export class ParallelConversion {
+  private readonly pool: WorkerPool;
+  private readonly queue: Group[] = [];
+  private readonly inFlight: number;
+  /** Files whose word without a lemma part has been reported: once per file, as when reading on one thread. */
+  private readonly lemmaWarned = new Set<string>();
+
+  constructor(
+    jobs: number,
+    private readonly read: BracketedReadOptions,
+    private readonly conversion: NamedConversionOptions,
+    private readonly naming: NamingOptions,
+    private readonly report: Report,
+    private readonly tally: ConversionTally,
+  ) {
+    this.pool = new WorkerPool(jobs);
+    this.inFlight = jobs * 3;
+  }
+
+  /** Converts one input given in pieces; yields CoNLL-U text as it is ready, in order. Results may lag behind the input until {@link drain}. */
+  async *convert(pieces: AsyncIterable<string>, file: string): AsyncGenerator<string> {
+    let events: Event[] = [];
+    let batches: CutBatch[] = [];
+    let size = 0;
+    let pushBatches = 0;
+    const cutter = new TreeCutter({ ...this.read, file }, (diagnostic) => events.push({ kind: 'problem', diagnostic }), (batch) => {
+      events.push({ kind: 'built', batch: batches.length });
+      batches.push(batch);
+      pushBatches++;
+      for (const tree of batch.trees) size += tree.text.length;
+    });
+    const step = (push: () => void) => {
+      pushBatches = 0;
+      const first = batches.length;
+      push();
+      // As on one thread: the trees a push completes are converted after every problem of that push.
+      for (let k = 0; k < pushBatches; k++) events.push({ kind: 'converted', batch: first + k });
+    };
+    const submit = () => {
+      if (events.length === 0) return;
+      const result = batches.length === 0 ? undefined : this.pool.run({ kind: 'convert', read: { ...this.read, file }, conversion: this.conversion, naming: this.naming, batches });
+      this.queue.push({ events, result });
+      events = [];
+      batches = [];
+      size = 0;
+    };
+    for await (const piece of pieces) {
+      for (let at = 0; at < piece.length; at += SLICE) {
+        step(() => cutter.push(piece.length <= SLICE ? piece : piece.slice(at, at + SLICE)));
+        if (size >= TASK_SIZE) {
+          submit();
+          while (this.queue.length > this.inFlight) yield await this.emitFirst();
+        }
+      }
+    }
+    step(() => cutter.end());
+    submit();
+    while (this.queue.length > this.inFlight) yield await this.emitFirst();
+  }
+
+  /** Waits for every task still running and yields their text, in order. */
+  async *drain(): AsyncGenerator<string> {
+    while (this.queue.length > 0) yield await this.emitFirst();
+  }
+
+  /** Stops the workers. */
+  async close(): Promise<void> {
+    await this.pool.close();
+  }
+
+  /** Reports the problems of the first group in order and gives its text. */
+  private async emitFirst(): Promise<string> {
+    const group = this.queue.shift()!;
+    const result = group.result ? await group.result : undefined;
+    let text = '';
+    for (const event of group.events) {
+      if (event.kind === 'problem') this.emit(event.diagnostic);
+      else if (event.kind === 'built') for (const diagnostic of result!.batches[event.batch]!.built) this.emit(diagnostic);
+      else {
+        const converted = result!.batches[event.batch]!;
+        for (const diagnostic of converted.converted) this.emit(diagnostic);
+        text += converted.text;
+      }
+    }
+    if (result) for (const key of ['read', 'converted', 'carried', 'skipped'] as const) this.tally[key] += result.tally[key];
+    return text;
+  }
+
+  private emit(diagnostic: Diagnostic): void {
+    if (diagnostic.code === 'missing-lemma') {
+      if (this.lemmaWarned.has(diagnostic.file)) return;
+      this.lemmaWarned.add(diagnostic.file);
+    }
+    this.report(diagnostic);
+  }
+}

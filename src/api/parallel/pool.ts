@@ -1,0 +1,40 @@
+import { availableParallelism } from 'node:os';
+import { Piscina } from 'piscina';
+import type { ConvertResult, Task } from './tasks.js';
+
+/** The number of jobs a run uses when none is asked for: TREEBRIDGE_JOBS when set to a whole number, else one per core. */
+export function defaultJobs(): number {
+  const set = process.env.TREEBRIDGE_JOBS;
+  if (set !== undefined && /^[1-9]\d*$/.test(set)) return Number(set);
+  return availableParallelism();
+}
+
+/**
+ * A pool of worker threads (piscina) running tasks of ./worker.js. The
+ * threads start at once and stay until `close`, so a run pays their start-up
+ * once.
+ */
+export class WorkerPool {
+  private readonly pool: Piscina;
+
+  constructor(readonly threads: number) {
+    this.pool = new Piscina({
+      filename: new URL('./worker.js', import.meta.url).href,
+      minThreads: threads,
+      maxThreads: threads,
+      // Tasks are queued by the caller, in order and few at a time; the pool needs no queue limit of its own.
+      concurrentTasksPerWorker: 1,
+      // Trees are short-lived: a young generation as large as the command gives its main thread
+      // (--min-semi-space-size=16 in the bin) spares most collections.
+      resourceLimits: { maxYoungGenerationSizeMb: 48 },
+    });
+  }
+
+  run(task: Task): Promise<ConvertResult> {
+    return this.pool.run(task) as Promise<ConvertResult>;
+  }
+
+  async close(): Promise<void> {
+    await this.pool.destroy();
+  }
+}

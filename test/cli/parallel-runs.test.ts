@@ -1,0 +1,44 @@
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runBin } from '../support/bin.js';
+import { projectRoot } from '../support/corpora.js';
+
+// Worker threads must not change a byte: the output, every problem in its
+// order, and the closing line of --jobs N are those of --jobs 1. The input is
+// the demo data (invented sentences) repeated until it spans many tasks,
+// broken trees, stray text and trees without identifiers among them.
+const demo = (name: string) => readFileSync(join(projectRoot, 'demo-data', name), 'utf8');
+
+function largeInput(folder: string): string[] {
+  const harbour = demo('harbour.psd');
+  const broken = demo('broken.psd');
+  const unnamed = '(S (NP-SBJ (DT A) (NN gull)) (VP (VBD landed)) (. .))\n( (S (NP-SBJ (NNP Mira)) (VP (VBD laughed-laugh)) (. .)))\n';
+  const parts: string[] = [];
+  for (let k = 0; k < 120; k++) parts.push(harbour, k % 7 === 3 ? broken : unnamed);
+  const first = join(folder, 'first.psd');
+  const second = join(folder, 'second.psd');
+  writeFileSync(first, parts.join(''));
+  // A second file ends inside a tree: the unclosed bracket is reported at its end.
+  writeFileSync(second, parts.slice(0, 40).join('') + '( (S (NP-SBJ (NN Rain)) (VP (VBD fell');
+  return [first, second];
+}
+
+describe('to-deps on worker threads', () => {
+  it('writes what --jobs 1 writes, problems and closing line included, byte for byte', { timeout: 120_000 }, async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const files = largeInput(folder);
+    const xml = join(projectRoot, 'demo-data', 'ferry-graphs.xml');
+    const args = ['to-deps', '--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb', '--lemmas', '--verbose', files[0]!, xml, files[1]!];
+    const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+    const three = await runBin([...args, '--jobs', '3'], { limitMs: 100_000 });
+    expect(one.code).toBe(1);
+    expect(one.stdout.length).toBeGreaterThan(500_000);
+    expect(one.stderr).toContain('[unclosed-bracket]');
+    expect(one.stderr).toContain('[missing-lemma]');
+    expect(three.code).toBe(one.code);
+    expect(three.stderr).toBe(one.stderr);
+    expect(three.stdout === one.stdout).toBe(true);
+  });
+});
