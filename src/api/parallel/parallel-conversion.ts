@@ -3,6 +3,7 @@ import type { BracketedReadOptions } from '../../formats/bracketed/read-options.
 import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
 import type { ConversionTally, NamingOptions } from '../convert.js';
 import { WorkerPool } from './pool.js';
+import run from './worker.js';
 import type { ConvertResult, NamedConversionOptions } from './tasks.js';
 
 /** Characters of input per task: enough that sending a task costs little beside converting it. */
@@ -31,6 +32,8 @@ export class ParallelConversion {
   private readonly pool: WorkerPool;
   private readonly queue: Group[] = [];
   private readonly inFlight: number;
+  private readonly jobs: number;
+  private submitted = 0;
   /** Files whose word without a lemma part has been reported: once per file, as when reading on one thread. */
   private readonly lemmaWarned = new Set<string>();
 
@@ -42,7 +45,10 @@ export class ParallelConversion {
     private readonly report: Report,
     private readonly tally: ConversionTally,
   ) {
-    this.pool = new WorkerPool(jobs);
+    // The main thread is one of the jobs: it converts every jobs-th task itself, between reading and
+    // writing, so that N jobs start N - 1 worker threads (each a heap and a copy of the tables).
+    this.jobs = jobs;
+    this.pool = new WorkerPool(jobs - 1);
     this.inFlight = jobs * 3;
   }
 
@@ -67,7 +73,8 @@ export class ParallelConversion {
     };
     const submit = () => {
       if (events.length === 0) return;
-      const result = batches.length === 0 ? undefined : this.pool.run({ kind: 'convert', read: { ...this.read, file }, conversion: this.conversion, naming: this.naming, batches });
+      const task = { kind: 'convert' as const, read: { ...this.read, file }, conversion: this.conversion, naming: this.naming, batches };
+      const result = batches.length === 0 ? undefined : this.submitted++ % this.jobs === this.jobs - 1 ? Promise.resolve(run(task)) : this.pool.run(task);
       this.queue.push({ events, result });
       events = [];
       batches = [];

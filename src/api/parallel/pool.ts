@@ -26,7 +26,7 @@ export class WorkerPool {
       concurrentTasksPerWorker: 1,
       // Trees are short-lived: a young generation as large as the command gives its main thread
       // (--min-semi-space-size=16 in the bin) spares most collections.
-      resourceLimits: { maxYoungGenerationSizeMb: 48 },
+      resourceLimits: { maxYoungGenerationSizeMb: 16, maxOldGenerationSizeMb: 96 },
     });
   }
 
