@@ -4,9 +4,9 @@
 // Each reader runs in a fresh process, several times, alternating, and the
 // fastest run counts for each (as Python's timeit advises): on a shared machine
 // slow runs measure the neighbours, and alternating exposes both readers to the same drift.
-import { execFileSync } from 'node:child_process';
-import { createReadStream, createWriteStream, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { execFileSync, spawnSync } from 'node:child_process';
+import { appendFileSync, createReadStream, createWriteStream, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { availableParallelism, devNull, tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import { fileURLToPath } from 'node:url';
@@ -155,4 +155,83 @@ console.log(row('treebridge to-brackets', conlluMB, bracketing) + `   (${Math.ro
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
+}
+
+// The command itself, as a user runs it: all IcePaHC texts in one file, to CoNLL-U with the
+// penn-historical head, label and word tables, at --jobs 1 and at one job per core; beside it,
+// NLTK reading the same file and a bare scan of its brackets. Then ten copies of the file, for
+// peak memory of to-deps, validate and stats (on the CoNLL-U written from the ten copies).
+{
+  const dir = mkdtempSync(join(tmpdir(), 'treebridge-bench-cli-'));
+  try {
+    const one = join(dir, 'icepahc.psd');
+    const ten = join(dir, 'icepahc-x10.psd');
+    const onePieces = files.map((file) => readFileSync(file, 'utf8').replace(/\n?$/, '\n'));
+    writeFileSync(one, onePieces.join(''));
+    writeFileSync(ten, '');
+    for (let copy = 0; copy < 10; copy++) appendFileSync(ten, onePieces.join(''));
+    const oneMB = statSync(one).size / 1048576;
+    const tenMB = statSync(ten).size / 1048576;
+    const record = join(dir, 'record.json');
+    const command = (args: string[]): Measure => {
+      const run = spawnSync(process.execPath, [...nodeFlags, '--import', join(root, 'bench/peak-memory.mjs'), join(here, '../src/bin/treebridge.js'), ...args], {
+        stdio: 'ignore',
+        env: { ...process.env, TREEBRIDGE_BENCH_RECORD: record },
+      });
+      // 1 says the input has problems (the corpus has a few); anything else is a failure of the run.
+      if (run.status !== 0 && run.status !== 1) throw new Error(`treebridge ${args.join(' ')} exited ${run.status}`);
+      const measured = JSON.parse(readFileSync(record, 'utf8')) as { seconds: number; peakMB: number };
+      return { trees: 0, ...measured };
+    };
+    const tables = ['--heads', 'penn-historical', '--labels', 'penn-historical', '--pos-map', 'penn-historical', '--lemmas', '--quiet'];
+    const cores = availableParallelism();
+    const toDeps = (input: string, jobs: number, output = devNull) => command(['to-deps', ...tables, '--jobs', String(jobs), input, '-o', output]);
+    const scanRuns: number[] = [];
+    const nltkRuns: Measure[] = [];
+    const jobRuns = new Map<number, Measure[]>([[1, []], [cores, []]]);
+    for (let round = 0; round < rounds; round++) {
+      nltkRuns.push(nltk([one]));
+      for (const jobs of jobRuns.keys()) jobRuns.get(jobs)!.push(toDeps(one, jobs));
+      const started = process.hrtime.bigint();
+      bareScan(readFileSync(one, 'utf8'));
+      scanRuns.push(Number(process.hrtime.bigint() - started) / 1e9);
+    }
+    const read = fastest(nltkRuns);
+    const oneConllu = join(dir, 'icepahc.conllu');
+    toDeps(one, 1, oneConllu);
+    const words = readFileSync(oneConllu, 'utf8').split('\n').filter((row) => /^\d+\t/.test(row)).length;
+    console.log(`\nthe command on all IcePaHC in one file, ${oneMB.toFixed(1)} MB, ${words.toLocaleString('en-US')} words: to-deps with penn-historical heads, labels and word table (fastest of ${rounds}; ${cores} cores):`);
+    console.log(`${'run'.padEnd(30)} ${'seconds'.padStart(8)} ${'words/s'.padStart(10)} ${'peak MB'.padStart(8)} ${'÷ NLTK read'.padStart(12)}`);
+    const line = (name: string, m: Measure) =>
+      console.log(`${name.padEnd(30)} ${m.seconds.toFixed(2).padStart(8)} ${Math.round(words / m.seconds).toLocaleString('en-US').padStart(10)} ${m.peakMB.toFixed(0).padStart(8)} ${(m.seconds / read.seconds).toFixed(2).padStart(12)}`);
+    line('NLTK reads the trees', read);
+    line('bare scan of the brackets', { trees: 0, seconds: Math.min(...scanRuns), peakMB: 0 });
+    for (const [jobs, runs] of jobRuns) line(`treebridge to-deps --jobs ${jobs}`, fastest(runs));
+    console.log(`targets: --jobs 1 at most 0.5x and --jobs 2 at most 0.3x NLTK's read time`);
+
+    const conllu = join(dir, 'icepahc-x10.conllu');
+    const bigDeps = new Map<number, Measure>([...jobRuns.keys()].map((jobs) => [jobs, toDeps(ten, jobs, jobs === 1 ? conllu : devNull)]));
+    const validate = command(['validate', ten]);
+    const oneValidate = command(['validate', one]);
+    const stats = command(['stats', conllu]);
+    console.log(`\npeak memory (MB), ${oneMB.toFixed(0)} MB and ten copies in one file, ${tenMB.toFixed(0)} MB (target: at most 150 for each):`);
+    for (const [jobs, runs] of jobRuns) console.log(`  to-deps --jobs ${jobs}: ${fastest(runs).peakMB.toFixed(0)} and ${bigDeps.get(jobs)!.peakMB.toFixed(0)}`);
+    console.log(`  validate: ${oneValidate.peakMB.toFixed(0)} and ${validate.peakMB.toFixed(0)}`);
+    console.log(`  stats on the CoNLL-U of the ten copies (${(statSync(conllu).size / 1048576).toFixed(0)} MB): ${stats.peakMB.toFixed(0)}`);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/** The least work that finds every tree: count brackets, skipping escaped ones. */
+function bareScan(text: string): number {
+  let depth = 0;
+  let trees = 0;
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if (code === 92) i++;
+    else if (code === 40) depth++;
+    else if (code === 41 && --depth === 0) trees++;
+  }
+  return trees;
 }
