@@ -27,12 +27,11 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
   addListingOptions(explain);
   addTreeFormatOption(explain);
   addBracketedReadOptions(explain).action(async (file: string, options: Record<string, unknown>) => done(await explainHeads(file, options, io)));
-  const collect = (value: string, previous: string[]) => [...previous, value];
   const score = heads
     .command('score')
     .description('convert bracketed trees and score them against gold dependencies: UAS, LAS and where the head table goes wrong')
     .argument('<files...>', 'bracketed files, in the order of the gold sentences')
-    .requiredOption('--gold <file>', 'a CoNLL-U file with gold dependencies of the same sentences, in order; repeat it for several files', collect, [])
+    .requiredOption('--gold <files...>', 'CoNLL-U files with gold dependencies of the same sentences, in the same order (several after one --gold, or --gold repeated)')
     .addOption(new Option('--score-punctuation <mode>', 'count punctuation in the scores, or ignore it (words attached as punct or tagged PUNCT in the gold)').choices(['count', 'ignore']).default('ignore'))
     .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
     .option('--unscored <key=values>', 'gold words not to score, by a MISC key and its values: Align=absorbed,extra')
@@ -46,7 +45,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .command('suggest')
     .description('learn from gold dependencies which child heads each phrase, and write a head table that improves on a base table')
     .argument('<files...>', 'bracketed files, in the order of the gold sentences')
-    .requiredOption('--gold <file>', 'a CoNLL-U file with gold dependencies of the same sentences, in order; repeat it for several files', collect, [])
+    .requiredOption('--gold <files...>', 'CoNLL-U files with gold dependencies of the same sentences, in the same order (several after one --gold, or --gold repeated)')
     .option('--base <table>', 'the base table to build on and keep where it is right', 'generic')
     .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
     .requiredOption('-o, --output <file>', 'the new table file')
