@@ -9,8 +9,12 @@ import { candidateOf } from './find-heads.js';
  * function tag of the dependent's phrase (lower-cased letters and a subtype
  * colon), else `dep`.
  */
-export function assignLabels(attachments: Attachment[], table: LabelTable | undefined, heads: HeadTable): string[] {
-  const contexts = labelContexts(attachments, heads);
+export function assignLabels(
+  attachments: Attachment[],
+  table: LabelTable | undefined,
+  heads: HeadTable,
+  contexts: Array<LabelContext | undefined> = labelContexts(attachments, heads),
+): string[] {
   return attachments.map((attachment, i) => {
     const context = contexts[i];
     if (!context) return 'root';

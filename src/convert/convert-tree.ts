@@ -51,8 +51,10 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   const { root, words } = prepared;
   findHeads(root, settings.heads, settings.coordination, settings.oracle ? oracleChooser(settings.oracle) : undefined);
   const attachments = attachDependents(root, words, settings.heads, settings.coordination, settings.punctuation);
-  const relations = assignLabels(attachments, settings.labels, settings.heads);
-  const classes = classifyWords(words, relations, labelContexts(attachments, settings.heads), settings.upos);
+  // What label rules see of each attachment, worked out once for the relations and the word classes.
+  const contexts = labelContexts(attachments, settings.heads);
+  const relations = assignLabels(attachments, settings.labels, settings.heads, contexts);
+  const classes = classifyWords(words, relations, contexts, settings.upos);
   const surface = joinWrittenWords(
     words.map((word) => word.form),
     words.map((word) => word.lemma),

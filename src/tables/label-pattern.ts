@@ -28,6 +28,24 @@ export function compilePattern(pattern: PatternSyntax): Matcher {
   return (candidate) => label(candidate) && test(candidate);
 }
 
+/**
+ * Compiles a list of patterns into one test that holds when any of them does.
+ * Plain categories (`NP`, `VBD`: no function tag, no `*`, no head-word test)
+ * are looked up in a set, as tables list many and a conversion asks often.
+ */
+export function compileAnyOf(patterns: PatternSyntax[]): Matcher {
+  const categories = new Set<string>();
+  const others: Matcher[] = [];
+  for (const pattern of patterns) {
+    const plain = !pattern.test && !pattern.label.includes('*') ? parseLabel(pattern.label) : undefined;
+    if (plain && plain.functions.length === 0) categories.add(plain.category);
+    else others.push(compilePattern(pattern));
+  }
+  if (others.length === 0) return (candidate) => categories.has(candidate.category);
+  if (categories.size === 0) return others.length === 1 ? others[0]! : (candidate) => others.some((m) => m(candidate));
+  return (candidate) => categories.has(candidate.category) || others.some((m) => m(candidate));
+}
+
 function compileLabel(text: string): Matcher {
   if (text === '*') return () => true;
   // `*-`: any child without function tags (the head of a bracketing built by to-brackets).

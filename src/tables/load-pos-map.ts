@@ -45,6 +45,18 @@ interface FeatureLine {
   feats: Map<string, string>;
 }
 
+interface TagEntry {
+  upos: string;
+  feats: Array<[string, string]>;
+  rules: Array<{ rule: ContextRule; conditions: Array<(context: WordContext) => boolean> }>;
+}
+
+type TagTest = ((context: WordContext) => boolean) & { tagTest: (tag: string) => boolean };
+
+function isTagTest(condition: (context: WordContext) => boolean): condition is TagTest {
+  return 'tagTest' in condition;
+}
+
 /** A rule that decides a word's UPOS (and features) by where the conversion put it. */
 export interface ContextRule {
   upos: string;
@@ -72,20 +84,25 @@ export class PosMap {
   /** The marker at the join of the pieces of one written word (`$` in `tungur$ $nar`), when the scheme has one. */
   joinMarker: string | undefined;
   private readonly cache = new Map<string, TagLine | null>();
+  /** Per tag: UPOS and features from tag and feature lines, and the rules its tag leaves open with their other conditions. */
+  private readonly entries = new Map<string, TagEntry>();
 
   /** Adds a tag line: UPOS and features for the tags a pattern matches. */
   addTag(pattern: string, upos: string, feats: Map<string, string> = new Map(), line = 0): void {
     const exact = !pattern.includes('*');
     this.tags.push({ test: exact ? (tag) => tag === pattern : globTest(pattern), specificity: exact ? 1e6 : pattern.replace(/\*/g, '').length, upos, feats, line });
     this.cache.clear();
+    this.entries.clear();
   }
 
   addFeatures(pattern: string, feats: Map<string, string>): void {
     this.features.push({ test: globTest(pattern), feats });
+    this.entries.clear();
   }
 
   addRule(rule: ContextRule): void {
     this.rules.push(rule);
+    this.entries.clear();
   }
 
   /** The tag line that decides a tag's UPOS: the most specific, the first of equals. */
@@ -107,18 +124,36 @@ export class PosMap {
 
   /** UPOS and features of a word: its tag line, the feature lines its tag matches, then the first rule that holds. */
   classify(context: WordContext): WordClass {
-    const line = this.lineFor(context.pos);
-    const feats = new Map(line?.feats ?? []);
-    let upos = line?.upos ?? '_';
-    for (const feature of this.features) if (feature.test(context.pos)) for (const [name, value] of feature.feats) feats.set(name, value);
-    for (const rule of this.rules) {
-      if (!rule.conditions.every((condition) => condition(context))) continue;
+    const entry = this.entryFor(context.pos);
+    const feats = new Map(entry.feats);
+    let upos = entry.upos;
+    for (const { rule, conditions } of entry.rules) {
+      if (!conditions.every((condition) => condition(context))) continue;
       upos = rule.upos;
       for (const [name, value] of rule.feats) if (value === '_') feats.delete(name);
       else feats.set(name, value);
       break;
     }
     return { upos, feats };
+  }
+
+  /** What a tag alone decides, worked out once per tag: a corpus has a few hundred tags and millions of words. */
+  private entryFor(tag: string): TagEntry {
+    let entry = this.entries.get(tag);
+    if (entry) return entry;
+    const line = this.lineFor(tag);
+    const feats = new Map(line?.feats ?? []);
+    for (const feature of this.features) if (feature.test(tag)) for (const [name, value] of feature.feats) feats.set(name, value);
+    const rules: TagEntry['rules'] = [];
+    for (const rule of this.rules) {
+      const tagTests = rule.conditions.filter(isTagTest);
+      if (!tagTests.every((condition) => condition.tagTest(tag))) continue;
+      rules.push({ rule, conditions: rule.conditions.filter((condition) => !isTagTest(condition)) });
+    }
+    entry = { upos: line?.upos ?? '_', feats: [...feats], rules };
+    if (this.entries.size > 50_000) this.entries.clear();
+    this.entries.set(tag, entry);
+    return entry;
   }
 
   /** A form with the scheme's bracket escapes undone: `-LRB-a-RRB-` → `(a)`. */
@@ -133,9 +168,27 @@ export class PosMap {
 /** Features written as UD writes them: `Name=Value` pairs sorted by name (case-insensitively), joined by `|`; `_` for none. */
 export function formatFeatures(feats: ReadonlyMap<string, string>): string {
   if (feats.size === 0) return '_';
+  if (feats.size === 1) for (const [name, value] of feats) return `${name}=${value}`;
+  // A corpus repeats a few thousand feature sets: each is sorted once.
+  let key = '';
+  for (const [name, value] of feats) key += `${name}=${value}|`;
+  let written = formatted.get(key);
+  if (written === undefined) {
+    written = sortFeatures(feats);
+    if (formatted.size > 100_000) formatted.clear();
+    formatted.set(key, written);
+  }
+  return written;
+}
+
+const formatted = new Map<string, string>();
+
+function sortFeatures(feats: ReadonlyMap<string, string>): string {
+  // Names are ASCII letters, digits and brackets: comparing their lower-cased forms is the UD order.
   return [...feats]
-    .sort((a, b) => a[0].toLowerCase().localeCompare(b[0].toLowerCase()) || (a[0] < b[0] ? -1 : 1))
-    .map(([name, value]) => `${name}=${value}`)
+    .map(([name, value]) => [name.toLowerCase(), name, value] as const)
+    .sort((a, b) => (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : a[1] < b[1] ? -1 : a[1] > b[1] ? 1 : 0))
+    .map(([, name, value]) => `${name}=${value}`)
     .join('|');
 }
 
@@ -345,7 +398,11 @@ function compileCondition(text: string): ((context: WordContext) => boolean) | s
     return (context) => wanted.has(context.relation) || wanted.has(context.relation.split(':')[0]!);
   }
   const tests = values.map((value) => globTest(key === 'pos' ? value : value.toLowerCase()));
-  if (key === 'pos') return (context) => tests.some((test) => test(context.pos));
+  if (key === 'pos') {
+    const tagTest = (tag: string) => tests.some((test) => test(tag));
+    // Marked as a test of the tag alone, so that a map can decide it once per tag (see PosMap.entryFor).
+    return Object.assign((context: WordContext) => tagTest(context.pos), { tagTest });
+  }
   if (key === 'form') return (context) => tests.some((test) => test(context.form.toLowerCase()));
   return (context) => tests.some((test) => test((context.lemma ?? context.form).toLowerCase()));
 }

@@ -3,9 +3,9 @@ import type { DiagnosticCode } from '../diagnostics/codes.js';
 import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import { z } from 'zod';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
-import { compilePattern, valueTest, type Candidate, type Matcher } from './label-pattern.js';
+import { compileAnyOf, compilePattern, valueTest, type Matcher } from './label-pattern.js';
 import type { HeadBlock, HeadStep, HeadTable, LabelCondition, LabelRule, LabelTable } from './table-model.js';
-import type { StatementSyntax, WordSyntax } from './table-syntax.js';
+import type { PatternSyntax, StatementSyntax, WordSyntax } from './table-syntax.js';
 import { findTable, readTableText, requireTable, TableError, type TableKind } from './table-source.js';
 
 export { headrulesFolder, TableError } from './table-source.js';
@@ -312,13 +312,18 @@ class TableLoader {
   }
 
   private pattern(w: WordSyntax): Matcher | undefined {
+    const syntax = this.patternSyntax(w);
+    return syntax && compilePattern(syntax);
+  }
+
+  private patternSyntax(w: WordSyntax): PatternSyntax | undefined {
     try {
       const syntax = parse(w.text, { startRule: 'Pattern' });
       if (syntax.test && !['pos', 'form', 'lemma'].includes(syntax.test.key)) {
         this.problem('table-invalid', w, `"${syntax.test.key}" is not a test of a head word: pos, form or lemma`);
         return undefined;
       }
-      return compilePattern(syntax);
+      return syntax;
     } catch (error) {
       if (!(error instanceof GrammarError)) throw error;
       this.problem('table-syntax', { line: w.line, column: w.column + error.location.start.offset }, `"${w.text}" is not a pattern such as NP, VB*, *-PRD or VB*[lemma=be]`);
@@ -378,8 +383,7 @@ class TableLoader {
   }
 
   private anyOf(words: WordSyntax[]): Matcher {
-    const matchers = words.map((w) => this.pattern(w)).filter((m): m is Matcher => m !== undefined);
-    return (candidate: Candidate) => matchers.some((m) => m(candidate));
+    return compileAnyOf(words.map((w) => this.patternSyntax(w)).filter((p): p is PatternSyntax => p !== undefined));
   }
 
   private problem(code: DiagnosticCode, at: { line: number; column: number }, message: string): void {
