@@ -22,8 +22,10 @@ async function* asAsync<T>(items: Stream<T>): AsyncGenerator<T> {
 export const roundTripSchema = z.strictObject({
   /** Example sentence ids per kind of loss. */
   examples: z.number().int().min(0).default(5),
-  /** Sentences kept for drawing per kind of loss (for the HTML report). */
+  /** Sentences with losses kept for drawing (for the HTML report), drawn evenly from the whole input. */
   samples: z.number().int().min(0).default(0),
+  /** The seed of that drawing: the same seed draws the same sentences. */
+  seed: z.number().int().default(1),
   /** Count punctuation in the scores (true), or leave it out (common practice). */
   countPunctuation: z.boolean().default(true),
 });
@@ -48,13 +50,13 @@ export async function roundTrip(
   options: Partial<ConversionOptions> & z.input<typeof bracketOptionsSchema> & z.input<typeof roundTripSchema>,
   report: Report = () => undefined,
 ): Promise<RoundTrip> {
-  const { examples, samples, countPunctuation, categories, shape, pos, ...conversionInput } = options;
-  const trip = checkOptions(roundTripSchema, { examples, samples, countPunctuation });
+  const { examples, samples, seed, countPunctuation, categories, shape, pos, ...conversionInput } = options;
+  const trip = checkOptions(roundTripSchema, { examples, samples, seed, countPunctuation });
   const leftOut: string[] = [];
   if ('trees' in items) {
     const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'xpos' });
     const resolved = resolveConversionOptions(checkOptions(conversionOptionsSchema, conversionInput));
-    const runner = new BracketRoundTrip(resolved.settings, bracketing, trip.examples, trip.samples, trip.countPunctuation, resolved.lossless);
+    const runner = new BracketRoundTrip(resolved.settings, bracketing, trip.examples, trip.samples, trip.countPunctuation, resolved.lossless, trip.seed);
     let number = 0;
     for await (const tree of asAsync(items.trees)) {
       number++;
@@ -71,7 +73,7 @@ export async function roundTrip(
   }
   const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'upos' });
   const resolved = resolveConversionOptions({ heads: conversionInput.heads ?? 'ud', labels: conversionInput.labels, traces: 'resolve', coordination: 'table' });
-  const runner = new DependencyRoundTrip(bracketing, resolved.settings, trip.examples, trip.samples, trip.countPunctuation);
+  const runner = new DependencyRoundTrip(bracketing, resolved.settings, trip.examples, trip.samples, trip.countPunctuation, trip.seed);
   let number = 0;
   for await (const sentence of asAsync(items.sentences)) {
     number++;
@@ -91,6 +93,10 @@ export const scoreSchema = z.strictObject({
   countPunctuation: z.boolean().default(false),
   /** Gold words not to score, by a MISC key and its values (`{ key: 'Align', values: ['absorbed', 'extra'] }`). */
   unscored: z.strictObject({ key: z.string().min(1), values: z.array(z.string()).min(1) }).optional(),
+  /** Sentences with wrong heads to keep for a report, drawn evenly from the whole input. */
+  samples: z.number().int().min(0).default(0),
+  /** The seed of that drawing: the same seed draws the same sentences. */
+  seed: z.number().int().default(1),
 });
 
 /** The scores of a conversion against gold dependencies, and how trees and gold were paired. */
@@ -111,12 +117,12 @@ export async function scoreHeads(
   options: ConversionOptions & z.input<typeof scoreSchema>,
   report: Report = () => undefined,
 ): Promise<HeadScore> {
-  const { countPunctuation, unscored, ...conversion } = options;
-  const score = checkOptions(scoreSchema, { countPunctuation, unscored });
+  const { countPunctuation, unscored, samples, seed, ...conversion } = options;
+  const score = checkOptions(scoreSchema, { countPunctuation, unscored, samples, seed });
   const { settings } = resolveConversionOptions(conversion);
   const pairing = emptyTally();
   const skip = score.unscored ? unscoredTest(score.unscored.key, score.unscored.values) : undefined;
-  const result = await scoreConversion(asAsync(trees), asAsync(gold), settings, report, score.countPunctuation, pairing, skip);
+  const result = await scoreConversion(asAsync(trees), asAsync(gold), settings, report, score.countPunctuation, pairing, skip, { size: score.samples, seed: score.seed });
   return { ...result, pairing };
 }
 

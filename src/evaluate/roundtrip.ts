@@ -10,6 +10,8 @@ import { carryComment } from '../lossless/carry-wordless-trees.js';
 import { writeTree } from '../traces/write-tree.js';
 import type { HeadTable } from '../tables/table-model.js';
 import { AttachmentScorer } from './score-attachments.js';
+import { EvenSample } from './sample-evenly.js';
+import { formatLabel } from '../model/label.js';
 import { bracketScores, emptyTotals, scoreBrackets, type BracketTotals, type Span } from './parseval.js';
 
 /** What a round trip can lose; bracket kinds take every lost or added bracket exactly once. */
@@ -27,9 +29,12 @@ export interface BracketSample {
   original: Tree;
   dependencies: DependencySentence;
   rebuilt: Tree;
-  /** Spans (`start:end`) lost from the original, and added in the rebuilt tree. */
+  /** Spans (`start:end`) lost from the original, added in the rebuilt tree, and kept with another label. */
   lost: Set<string>;
   added: Set<string>;
+  relabelled: Set<string>;
+  /** Empty elements and traces of the original, which no dependency tree holds: `NP-SBJ *T*-1`. */
+  emptyElements: string[];
 }
 
 /** Dependencies direction: the sentence there and back, the bracketing between, what differs. */
@@ -115,8 +120,12 @@ export class BracketRoundTrip {
   private readonly totals: BracketTotals = emptyTotals();
   private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
   private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
-  /** Sentences kept for drawing, at most `samplesPerKind` for each kind. */
-  readonly samples: RoundTripSample[] = [];
+  /** Sentences with losses kept for drawing, drawn evenly from the whole input. */
+  private readonly sampled: EvenSample<BracketSample>;
+
+  get samples(): BracketSample[] {
+    return this.sampled.items();
+  }
   /** Trees left out because they hold no words (plain mode; lossless mode carries them). */
   wordless = 0;
 
@@ -124,12 +133,16 @@ export class BracketRoundTrip {
     private readonly conversion: ConversionSettings,
     private readonly bracketing: BracketSettings,
     private readonly maxExamples = 5,
-    private readonly samplesPerKind = 0,
+    /** Sentences with losses to keep for drawing, and the seed of their drawing. */
+    samples = 0,
     /** False: punctuation words are left out of the spans before scoring (common practice). */
     private readonly countPunctuation = true,
     /** Lossless mode: the bracketing is carried through the dependencies and must come back exactly. */
     private readonly lossless = false,
-  ) {}
+    seed = 1,
+  ) {
+    this.sampled = new EvenSample(samples, seed);
+  }
 
   add(tree: Tree, id: string): Tree | undefined {
     const dependencies = convertTree(tree, this.conversion, id, id);
@@ -196,16 +209,19 @@ export class BracketRoundTrip {
   }
 
   private keepSample(id: string, original: Tree, dependencies: DependencySentence, rebuilt: Tree, gold: Span[], test: Span[], before: Record<LossKind, number>): void {
-    if (this.samplesPerKind === 0) return;
     const kinds = lossKinds.filter((kind) => this.losses[kind] > before[kind]);
-    const wanted = kinds.filter((kind) => this.samples.filter((s) => s.kinds.includes(kind)).length < this.samplesPerKind);
-    if (wanted.length === 0) return;
-    const key = (s: Span) => `${s.start}:${s.end}`;
-    const testKeys = new Set(test.map(key));
-    const goldKeys = new Set(gold.map(key));
-    const lost = new Set(gold.map(key).filter((k) => !testKeys.has(k)));
-    const added = new Set(test.map(key).filter((k) => !goldKeys.has(k)));
-    this.samples.push({ direction: 'brackets', id, kinds, original, dependencies, rebuilt, lost, added });
+    if (kinds.length === 0) return;
+    this.sampled.offer(() => {
+      const key = (s: Span) => `${s.start}:${s.end}`;
+      const testLabels = new Map(test.map((s) => [key(s), s.label]));
+      const goldLabels = new Map(gold.map((s) => [key(s), s.label]));
+      const lost = new Set([...goldLabels.keys()].filter((k) => !testLabels.has(k)));
+      const added = new Set([...testLabels.keys()].filter((k) => !goldLabels.has(k)));
+      const relabelled = new Set([...goldLabels].filter(([k, label]) => testLabels.has(k) && testLabels.get(k) !== label).map(([k]) => k));
+      const emptyElements: string[] = [];
+      for (const node of nodesTopDown(original.children)) if (node.type === 'empty') emptyElements.push(`${formatLabel(node.label)} ${node.text}`);
+      return { direction: 'brackets' as const, id, kinds, original, dependencies, rebuilt, lost, added, relabelled, emptyElements };
+    });
   }
 
   private note(kind: LossKind, id: string, count = 1): void {
@@ -276,18 +292,25 @@ export class DependencyRoundTrip {
   private sentences = 0;
   private readonly losses = Object.fromEntries(lossKinds.map((k) => [k, 0])) as Record<LossKind, number>;
   private readonly examples = Object.fromEntries(lossKinds.map((k) => [k, [] as string[]])) as Record<LossKind, string[]>;
-  /** Sentences kept for drawing, at most `samplesPerKind` for each kind. */
-  readonly samples: DependencySample[] = [];
+  /** Sentences with losses kept for drawing, drawn evenly from the whole input. */
+  private readonly sampled: EvenSample<DependencySample>;
+
+  get samples(): DependencySample[] {
+    return this.sampled.items();
+  }
 
   constructor(
     private readonly bracketing: BracketSettings,
     private readonly conversion: ConversionSettings,
     private readonly maxExamples = 5,
-    private readonly samplesPerKind = 0,
+    /** Sentences with losses to keep for drawing. */
+    samples = 0,
     /** False: words attached as punct are left out of UAS and LAS (common practice). */
     countPunctuation = true,
+    seed = 1,
   ) {
     this.scorer = new AttachmentScorer(countPunctuation);
+    this.sampled = new EvenSample(samples, seed);
   }
 
   /**
@@ -317,12 +340,12 @@ export class DependencyRoundTrip {
       return;
     }
     this.note('other', id, scored - (this.scorer.score.labelsRight - before));
-    if (this.samples.length < this.samplesPerKind) {
+    this.sampled.offer(() => {
       const relations = (s: DependencySentence) => new Map(s.lines.filter((l) => l.type === 'word').map((l) => [l.id, `${l.head}:${l.deprel}`]));
       const there = relations(sentence);
       const changed = new Set([...relations(back.sentence)].filter(([word, arc]) => there.get(word) !== arc).map(([word]) => Number(word)));
-      this.samples.push({ direction: 'dependencies', id, kinds: ['other'], original: sentence, rebuilt: rebuilt.tree, back: back.sentence, changed });
-    }
+      return { direction: 'dependencies' as const, id, kinds: ['other' as LossKind], original: sentence, rebuilt: rebuilt.tree, back: back.sentence, changed };
+    });
   }
 
   private note(kind: LossKind, id: string, count = 1): void {

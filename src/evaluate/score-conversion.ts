@@ -5,6 +5,7 @@ import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { AttachmentScorer, isPunctuation, universalPart } from './score-attachments.js';
 import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
+import { EvenSample } from './sample-evenly.js';
 
 /** One word the conversion attached wrongly, for the error tables. */
 export interface AttachmentError {
@@ -15,6 +16,8 @@ export interface AttachmentError {
   goldRelation: string;
   /** The table line of the step that chose the wrong head, when a step did. */
   stepLine: number | undefined;
+  /** The step as the table writes it (`VP (line 12): left each TO VBD …`), when a step chose. */
+  step: string | undefined;
   /** The word, its head as converted and its gold head (positions). */
   word: number;
   form: string;
@@ -42,6 +45,39 @@ export interface ConversionScore {
   byParent: ParentTally[];
   /** Trees that did not convert, and pairs whose words did not line up. */
   skipped: number;
+  /** Sentences with wrong heads drawn evenly from the whole input, for the report. */
+  samples: HeadSample[];
+}
+
+/** A phrase whose head child differs from the one that holds the gold head. */
+export interface WrongChoice {
+  label: string;
+  /** Its words, 0-based from `start`, up to `end` exclusive. */
+  start: number;
+  end: number;
+  /** The child the table chose and the child the oracle chose, each as label and head word. */
+  chosen: string;
+  better: string;
+  /** Why the table chose as it did. */
+  reason: string;
+}
+
+/** A sentence with wrong heads, kept for drawing: the tree, both dependency trees, what went wrong. */
+export interface HeadSample {
+  id: string;
+  tree: Tree;
+  converted: DependencySentence;
+  gold: DependencySentence;
+  /** Words (from 1) attached wrongly. */
+  wrong: Set<number>;
+  errors: AttachmentError[];
+  choices: WrongChoice[];
+}
+
+/** How many sentences with wrong heads to keep for the report, drawn with which seed. */
+export interface Sampling {
+  size: number;
+  seed: number;
 }
 
 /**
@@ -58,7 +94,9 @@ export async function scoreConversion(
   withPunctuation = false,
   tally: PairingTally = emptyTally(),
   unscored?: (word: DependencyWord) => boolean,
+  sampling: Sampling = { size: 0, seed: 1 },
 ): Promise<ConversionScore> {
+  const sample = new EvenSample<HeadSample>(sampling.size, sampling.seed);
   const scorer = new AttachmentScorer(withPunctuation, unscored);
   const oracle = new AttachmentScorer(withPunctuation, unscored);
   const errors: AttachmentError[] = [];
@@ -77,6 +115,7 @@ export async function scoreConversion(
     const goldWords = goldSentence.lines.filter((l): l is DependencyWord => l.type === 'word');
     const parentOf = parentsByWord(conversion.root, conversion.words.length);
     const oracleWords = oracleConversion ? wordsOf(oracleConversion.sentence) : [];
+    const sentenceErrors: AttachmentError[] = [];
     wordsOf(conversion.sentence).forEach((line, i) => {
       const goldWord = goldWords[i]!;
       if (!withPunctuation && isPunctuation(goldWord)) return;
@@ -91,21 +130,68 @@ export async function scoreConversion(
       tally.errors++;
       if (tally.examples.length < 3 && !tally.examples.includes(id)) tally.examples.push(id);
       const oracleRight = oracleWords[i]?.head === goldWord.head;
-      errors.push({
+      const error: AttachmentError = {
         sentence: id,
         parent: category,
         goldRelation: universalPart(goldWord.deprel),
         stepLine: parent?.head?.line,
+        step: parent?.head?.line === undefined ? undefined : parent.head.reason.replace(/ \[matched [^\]]*\]$/, ''),
         word: word.index,
         form: word.form,
         head: Number(line.head),
         goldHead: Number(goldWord.head),
         oracleRight,
-      });
+      };
+      errors.push(error);
+      sentenceErrors.push(error);
     });
+    if (sentenceErrors.length === 0) continue;
+    sample.offer(() => ({
+      id,
+      tree,
+      converted: conversion.sentence,
+      gold: goldSentence,
+      wrong: new Set(sentenceErrors.map((error) => error.word)),
+      errors: sentenceErrors,
+      choices: oracleConversion ? wrongChoices(conversion.root, oracleConversion.root) : [],
+    }));
   }
   const byParent = [...parents.values()].sort((a, b) => b.errors - a.errors || b.words - a.words);
-  return { scorer, oracle, errors, byParent, skipped };
+  return { scorer, oracle, errors, byParent, skipped, samples: sample.items() };
+}
+
+/** The phrases whose head child differs between two conversions of one tree (the table's and the oracle's). */
+function wrongChoices(root: ConversionNode, oracleRoot: ConversionNode): WrongChoice[] {
+  const ours = [...phrasesTopDown(root)];
+  const theirs = [...phrasesTopDown(oracleRoot)];
+  const choices: WrongChoice[] = [];
+  ours.forEach((phrase, k) => {
+    const other = theirs[k];
+    if (!other || !phrase.head || !other.head || phrase.head.child === other.head.child) return;
+    const indices = wordIndices(phrase);
+    const describe = (node: ConversionNode) => `${node.kind === 'phrase' ? node.label : node.pos} "${headWordOf(node).form}"`;
+    choices.push({
+      label: phrase.label,
+      start: Math.min(...indices) - 1,
+      end: Math.max(...indices),
+      chosen: describe(phrase.children[phrase.head.child]!),
+      better: describe(phrase.children[other.head.child]!),
+      reason: phrase.head.reason,
+    });
+  });
+  return choices;
+}
+
+/** The word positions a phrase covers. */
+function wordIndices(phrase: PhraseNode): number[] {
+  const indices: number[] = [];
+  const stack: ConversionNode[] = [phrase];
+  while (stack.length > 0) {
+    const node = stack.pop()!;
+    if (node.kind === 'word') indices.push(node.index);
+    else stack.push(...node.children);
+  }
+  return indices;
 }
 
 import type { ConversionNode, PhraseNode } from '../convert/conversion-tree.js';

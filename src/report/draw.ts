@@ -57,8 +57,14 @@ interface Bar {
   level: number;
 }
 
-/** The span chart of a bracketing; `marked` spans (`start:end`) are drawn as lost or added. */
-export function drawBracketing(tree: Tree, marked: ReadonlySet<string>, markClass: 'lost' | 'added'): string {
+/**
+ * The span chart of a bracketing. `marked` gives a mark (a class of the
+ * legend: lost, added, relabelled, wrong) to the phrases over a span of
+ * words, keyed `start:end` (0-based, end exclusive). A label too long for its
+ * bar is shortened with `…`; the whole label shows on hover and in a line
+ * under the drawing.
+ */
+export function drawBracketing(tree: Tree, marked: ReadonlyMap<string, string> = new Map()): string {
   const words: string[] = [];
   const tags: string[] = [];
   const bars: Bar[] = [];
@@ -89,29 +95,33 @@ export function drawBracketing(tree: Tree, marked: ReadonlySet<string>, markClas
   const { boxes, width } = layoutWords(words);
   const levels = Math.max(0, ...bars.map((b) => b.level));
   const top = levels * ROW;
+  const shortened = new Set<string>();
   const rects = bars
     .map((bar) => {
       const x = boxes[bar.start]!.x;
       const right = boxes[bar.end - 1]!.x + boxes[bar.end - 1]!.width;
       const y = top - bar.level * ROW + 2;
-      const cls = marked.has(`${bar.start}:${bar.end}`) ? `bar ${markClass}` : 'bar';
-      const label = escapeHtml(bar.label);
-      // A label wider than its bar is squeezed to fit; the whole label stays readable on hover.
-      const room = right - x - 8;
-      const fit = bar.label.length * LABEL_CHAR > room ? ` textLength="${room}" lengthAdjust="spacingAndGlyphs"` : '';
-      return `<g><title>${label}</title><rect class="${cls}" x="${x}" y="${y}" width="${right - x}" height="${ROW - 4}" rx="3"/><text class="label" x="${x + 4}" y="${y + 13}"${fit}>${label}</text></g>`;
+      const mark = marked.get(`${bar.start}:${bar.end}`);
+      const cls = mark ? `bar ${mark}` : 'bar';
+      // A label wider than its bar is shortened, never squeezed: letters keep their width.
+      const room = Math.floor((right - x - 8) / LABEL_CHAR);
+      const shown = bar.label.length <= room ? bar.label : `${bar.label.slice(0, Math.max(1, room - 1))}…`;
+      if (shown !== bar.label) shortened.add(bar.label);
+      return `<g><title>${escapeHtml(bar.label)}</title><rect class="${cls}" x="${x}" y="${y}" width="${right - x}" height="${ROW - 4}" rx="3"/><text class="label" x="${x + 4}" y="${y + 13}">${escapeHtml(shown)}</text></g>`;
     })
     .join('');
   const height = top + ROW + 16;
-  return `<svg class="bracketing" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${rects}${wordRow(words, tags, boxes, top)}</svg>`;
+  const svg = `<svg class="bracketing" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${rects}${wordRow(words, tags, boxes, top)}</svg>`;
+  return shortened.size === 0 ? svg : `${svg}<p class="labels">shortened: ${[...shortened].map(escapeHtml).join(' ')}</p>`;
 }
 
 /**
  * Arcs over words: `heads[i]` is the head of word i+1 (0: root); `crossing` names
- * dependents whose arc is non-projective, `changed` those whose arc differs from
- * the other side of a round trip.
+ * dependents whose arc is non-projective; `marked` gives a mark of the legend
+ * (changed, missed) to the arcs of some dependents. Relation labels stand at
+ * the top of their arcs, over a halo that keeps them readable where arcs cross.
  */
-export function drawDependencies(words: string[], tags: string[], heads: number[], relations: string[], crossing: ReadonlySet<number>, changed: ReadonlySet<number> = new Set()): string {
+export function drawDependencies(words: string[], tags: string[], heads: number[], relations: string[], crossing: ReadonlySet<number>, marked: ReadonlyMap<number, string> = new Map()): string {
   const { boxes, width } = layoutWords(words);
   const centre = (i: number) => boxes[i - 1]!.x + boxes[i - 1]!.width / 2;
   const tallest = Math.max(1, ...heads.map((h, i) => (h === 0 ? 0 : Math.abs(h - (i + 1)))));
@@ -122,10 +132,10 @@ export function drawDependencies(words: string[], tags: string[], heads: number[
       const from = centre(head);
       const to = centre(i + 1);
       const rise = Math.min(Math.abs(head - (i + 1)), 12) * 14 + 10;
-      const cls = ['arc', crossing.has(i + 1) ? 'crossing' : '', changed.has(i + 1) ? 'changed' : ''].filter(Boolean).join(' ');
+      const cls = ['arc', crossing.has(i + 1) ? 'crossing' : '', marked.get(i + 1) ?? ''].filter(Boolean).join(' ');
       return (
         `<path class="${cls}" d="M ${from} ${top} C ${from} ${top - rise}, ${to} ${top - rise}, ${to} ${top - 2}" marker-end="url(#tip)"/>` +
-        `<text class="relation" x="${(from + to) / 2}" y="${top - rise * 0.75 - 2}">${escapeHtml(relations[i] ?? '')}</text>`
+        `<text class="relation" x="${(from + to) / 2}" y="${top - rise * 0.75 + 3}">${escapeHtml(relations[i] ?? '')}</text>`
       );
     })
     .join('');

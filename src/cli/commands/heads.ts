@@ -14,6 +14,7 @@ import { describePairing, emptyTally, pairingIncomplete, type PairingTally } fro
 import { basename, dirname, relative, resolve } from 'node:path';
 import { findTable, headrulesFolder, readTableText } from '../../tables/table-source.js';
 import { wholeNumber } from '../whole-number.js';
+import { writeScoreReport } from '../../report/write-score-report.js';
 
 export function registerHeads(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const heads = program.command('heads').description('look into head tables: why a head was chosen');
@@ -36,6 +37,9 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
     .option('--unscored <key=values>', 'gold words not to score, by a MISC key and its values: Align=absorbed,extra')
     .option('--json', 'print the scores as JSON')
+    .option('--report <file>', 'also write an HTML page for tuning: the errors by phrase and by table step, linked to sentences drawn with the wrong choices marked')
+    .addOption(new Option('--report-limit <n>', 'sentences with wrong heads drawn in the page, chosen evenly from the whole input').default(40).argParser(wholeNumber(1)))
+    .addOption(new Option('--report-seed <n>', 'the seed of that choice: the same seed draws the same sentences').default(1).argParser(wholeNumber(0)))
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(score);
   addListingOptions(score);
@@ -106,7 +110,7 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
   if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
-  const outputs = [options.output as string | undefined];
+  const outputs = [options.output as string | undefined, options.report as string | undefined];
   const wrong = [
     ...checkInputs(trees.inputs, trees.failures, 'heads score', ['bracketed', 'xml'], options.from as InputFormat | undefined, outputs, io),
     ...checkInputs(gold.inputs, gold.failures, 'heads score --gold', ['conllu'], undefined, outputs, io),
@@ -122,7 +126,17 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
     const result = await scoreHeadsOf(
       readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
       readSentencesOf(gold.inputs, report, io),
-      { ...conversionOptionsOf(options), heads: settings.heads, labels: settings.labels, posMap: settings.upos, lossless: false, countPunctuation: options.scorePunctuation === 'count', unscored },
+      {
+        ...conversionOptionsOf(options),
+        heads: settings.heads,
+        labels: settings.labels,
+        posMap: settings.upos,
+        lossless: false,
+        countPunctuation: options.scorePunctuation === 'count',
+        unscored,
+        samples: typeof options.report === 'string' ? (options.reportLimit as number) : 0,
+        seed: options.reportSeed as number,
+      },
       report,
     );
     tally = result.pairing;
@@ -146,12 +160,22 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
       await output.write(formatScore(result, settings.heads.name, tally));
     }
     await output.commit();
+    if (typeof options.report === 'string') {
+      const page = Output.to(options.report, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
+      try {
+        await page.write(writeScoreReport(result, settings.heads.name, tally));
+        await page.commit();
+      } catch (error) {
+        await page.abandon();
+        throw error;
+      }
+    }
   } catch (error) {
     await output.abandon();
     throw error;
   }
   problems.printSummary();
-  io.stderr.write(`treebridge: ${describePairing(tally)}\n`);
+  io.stderr.write(`treebridge: ${describePairing(tally)}${typeof options.report === 'string' ? `; report written to ${options.report}` : ''}\n`);
   const strictFailure = options.strict === true && pairingIncomplete(tally);
   return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
 }
@@ -199,7 +223,7 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
-  const outputs = [options.output as string | undefined];
+  const outputs = [options.output as string | undefined, options.report as string | undefined];
   const wrong = [
     ...checkInputs(trees.inputs, trees.failures, 'heads suggest', ['bracketed', 'xml'], options.from as InputFormat | undefined, outputs, io),
     ...checkInputs(gold.inputs, gold.failures, 'heads suggest --gold', ['conllu'], undefined, outputs, io),

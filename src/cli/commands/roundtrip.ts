@@ -27,7 +27,8 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .addOption(new Option('--examples <n>', 'example sentence ids per kind of loss').default(5).argParser(wholeNumber(0)))
     .option('--fail-above <limit>', 'KIND=PCT: exit 1 when a kind of loss exceeds PCT per 100 gold brackets (or words); repeat it for several kinds; kinds: ' + lossKinds.join(', '), (value: string, previous: string[]) => [...previous, value], [])
     .option('--report <file>', 'also write an HTML page drawing the sentences with losses, original and back side by side')
-    .addOption(new Option('--report-limit <n>', 'sentences drawn per kind of loss in the HTML page').default(20).argParser(wholeNumber(1)))
+    .addOption(new Option('--report-limit <n>', 'sentences with losses drawn in the HTML page, chosen evenly from the whole input').default(40).argParser(wholeNumber(1)))
+    .addOption(new Option('--report-seed <n>', 'the seed of that choice: the same seed draws the same sentences').default(1).argParser(wholeNumber(0)))
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
   addListingOptions(command);
@@ -68,6 +69,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     shape: options.shape as 'flat' | 'layered',
     examples: options.examples as number,
     samples: drawn,
+    seed: options.reportSeed as number,
     countPunctuation: options.scorePunctuation !== 'ignore',
   };
   let trip: RoundTrip;
@@ -98,7 +100,7 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   if (typeof options.report === 'string') {
     const page = Output.to(options.report, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
     try {
-      await page.write(writeReport(report, samples, options.reportLimit as number));
+      await page.write(writeReport(report, samples));
       await page.commit();
     } catch (error) {
       await page.abandon();
