@@ -23,6 +23,8 @@ const GAP = 8;
 const ROW = 22;
 /** Width of one character of a phrase label (11px monospace). */
 const LABEL_CHAR = 6.7;
+/** Width of one character of a relation label (10px monospace). */
+const RELATION_CHAR = 6.1;
 
 /** Word boxes side by side, widths by text length. */
 function layoutWords(words: string[]): { boxes: Box[]; width: number } {
@@ -125,20 +127,36 @@ export function drawDependencies(words: string[], tags: string[], heads: number[
   const { boxes, width } = layoutWords(words);
   const centre = (i: number) => boxes[i - 1]!.x + boxes[i - 1]!.width / 2;
   const tallest = Math.max(1, ...heads.map((h, i) => (h === 0 ? 0 : Math.abs(h - (i + 1)))));
-  const top = Math.min(tallest, 12) * 14 + 24;
-  const arcs = heads
-    .map((head, i) => {
-      if (head === 0) return '';
-      const from = centre(head);
-      const to = centre(i + 1);
-      const rise = Math.min(Math.abs(head - (i + 1)), 12) * 14 + 10;
-      const cls = ['arc', crossing.has(i + 1) ? 'crossing' : '', marked.get(i + 1) ?? ''].filter(Boolean).join(' ');
-      return (
-        `<path class="${cls}" d="M ${from} ${top} C ${from} ${top - rise}, ${to} ${top - rise}, ${to} ${top - 2}" marker-end="url(#tip)"/>` +
-        `<text class="relation" x="${(from + to) / 2}" y="${top - rise * 0.75 + 3}">${escapeHtml(relations[i] ?? '')}</text>`
-      );
-    })
-    .join('');
+  // Room above the tallest arc for labels moved up out of each other's way.
+  const top = Math.min(tallest, 12) * 14 + 46;
+  // Relation labels stand at the top of their arcs; a label that would overlap one already placed
+  // moves up a line at a time (a few lines at most), so that labels of arcs of one height stay apart.
+  const placed: Array<{ left: number; right: number; y: number }> = [];
+  const placeLabel = (x: number, y: number, text: string) => {
+    const half = (text.length * RELATION_CHAR) / 2 + 2;
+    let at = y;
+    for (let tries = 0; tries < 4 && placed.some((p) => p.left < x + half && x - half < p.right && Math.abs(p.y - at) < 11); tries++) at -= 11;
+    placed.push({ left: x - half, right: x + half, y: at });
+    return at;
+  };
+  const order = heads.map((head, i) => ({ head, i })).filter(({ head }) => head !== 0);
+  // Shorter arcs first: their labels sit lowest and have least room to move.
+  order.sort((a, b) => Math.abs(a.head - (a.i + 1)) - Math.abs(b.head - (b.i + 1)) || a.i - b.i);
+  const drawn = new Map<number, string>();
+  for (const { head, i } of order) {
+    const from = centre(head);
+    const to = centre(i + 1);
+    const rise = Math.min(Math.abs(head - (i + 1)), 12) * 14 + 10;
+    const cls = ['arc', crossing.has(i + 1) ? 'crossing' : '', marked.get(i + 1) ?? ''].filter(Boolean).join(' ');
+    const relation = relations[i] ?? '';
+    const y = placeLabel((from + to) / 2, top - rise * 0.75 + 3, relation);
+    drawn.set(
+      i,
+      `<path class="${cls}" d="M ${from} ${top} C ${from} ${top - rise}, ${to} ${top - rise}, ${to} ${top - 2}" marker-end="url(#tip)"/>` +
+        `<text class="relation" x="${(from + to) / 2}" y="${y}">${escapeHtml(relation)}</text>`,
+    );
+  }
+  const arcs = heads.map((_, i) => drawn.get(i) ?? '').join('');
   const height = top + ROW + 16;
   const marker = '<defs><marker id="tip" viewBox="0 0 6 6" refX="5" refY="3" markerWidth="6" markerHeight="6" orient="auto"><path d="M0,0 L6,3 L0,6 z" class="tip"/></marker></defs>';
   return `<svg class="dependencies" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${marker}${arcs}${wordRow(words, tags, boxes, top)}</svg>`;

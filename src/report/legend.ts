@@ -28,7 +28,7 @@ const dash = (line: Mark['line']) => (line === 'dashed' ? 'stroke-dasharray: 5 3
 const STYLE = `
 body { font: 14px/1.45 system-ui, sans-serif; margin: 2rem; color: #1f2933; background: #fbfaf7; }
 h1 { font-size: 1.4rem; } h2 { font-size: 1.15rem; margin-top: 2.5rem; border-bottom: 2px solid #d9d4c7; } h3 { font-size: 1rem; margin-bottom: 0.3rem; }
-nav.contents ol { columns: 3; } a { color: #1d5a8a; }
+nav.contents ol { columns: 3; } a { color: #1d5a8a; overflow-wrap: anywhere; }
 table.summary { border-collapse: collapse; } table.summary td, table.summary th { padding: 0.2rem 0.8rem; border-bottom: 1px solid #e4e0d5; text-align: left; vertical-align: top; }
 table.summary { max-width: 100%; } table.summary td.n { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; } table.summary td.step { font: 12px ui-monospace, monospace; width: 45%; overflow-wrap: anywhere; } table.summary td.links { min-width: 20rem; }
 section.sentence { margin: 1.2rem 0 2rem; } ul.problems { margin: 0.2rem 0 0.6rem; font-size: 0.9rem; }

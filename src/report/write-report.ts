@@ -8,6 +8,12 @@ import { legend, page } from './legend.js';
 /** The anchor of a drawn sentence: its place among the drawn ones, as ids may hold any character. */
 export const anchorOf = (index: number) => `s${index + 1}`;
 
+/** A sentence's name as shown: without the folders of its file (`harbour.psd:12`), the whole name on hover. */
+export function shownId(id: string): string {
+  const short = id.replace(/^.*[/\\]/, '');
+  return short === id ? escapeHtml(id) : `<span title="${escapeHtml(id)}">${escapeHtml(short)}</span>`;
+}
+
 /**
  * The round-trip report as one self-contained HTML page (no script, no
  * outside asset): the scores, the table of losses whose examples link to the
@@ -26,7 +32,7 @@ export function writeReport(report: RoundTripReport, samples: RoundTripSample[])
   const scores = report.brackets
     ? `bracket F1 ${percent(report.brackets.f1)} (precision ${percent(report.brackets.precision)}, recall ${percent(report.brackets.recall)}), labelled F1 ${percent(report.brackets.labelledF1)}, crossing brackets ${report.brackets.crossing}`
     : `UAS ${percent(report.attachment!.uas)}, LAS ${percent(report.attachment!.las)}`;
-  const link = (index: number) => `<a href="#${anchorOf(index)}">${escapeHtml(samples[index]!.id)}</a>`;
+  const link = (index: number) => `<a href="#${anchorOf(index)}">${shownId(samples[index]!.id)}</a>`;
   const rows = lossKinds
     .map((kind) => {
       const drawn = samples.map((sample, index) => (sample.kinds.includes(kind) ? index : -1)).filter((index) => index >= 0);
@@ -49,7 +55,7 @@ export function writeReport(report: RoundTripReport, samples: RoundTripSample[])
 }
 
 function drawSample(sample: RoundTripSample, index: number): string {
-  const header = `<h3 id="${anchorOf(index)}">${escapeHtml(sample.id)}</h3><p>${sample.kinds.join(', ')}</p>`;
+  const header = `<h3 id="${anchorOf(index)}">${shownId(sample.id)}</h3><p>${sample.kinds.join(', ')}</p>`;
   return `<section class="sentence">${header}${sample.direction === 'brackets' ? bracketViews(sample) : dependencyViews(sample)}</section>`;
 }
 

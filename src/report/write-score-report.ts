@@ -3,7 +3,7 @@ import type { ConversionScore } from '../evaluate/score-conversion.js';
 import type { PairingTally } from '../evaluate/pair-with-gold.js';
 import { drawBracketing, escapeHtml } from './draw.js';
 import { legend, page } from './legend.js';
-import { anchorOf, drawSentence, figure } from './write-report.js';
+import { anchorOf, drawSentence, figure, shownId } from './write-report.js';
 
 /**
  * The tuning report of a head table as one self-contained HTML page (no
@@ -18,7 +18,7 @@ import { anchorOf, drawSentence, figure } from './write-report.js';
 export function writeScoreReport(score: ConversionScore, table: string, pairing: PairingTally): string {
   const { scorer, oracle, byParent, errors, samples } = score;
   const percent = (v: number) => `${(100 * v).toFixed(2)}%`;
-  const link = (index: number) => `<a href="#${anchorOf(index)}">${escapeHtml(samples[index]!.id)}</a>`;
+  const link = (index: number) => `<a href="#${anchorOf(index)}">${shownId(samples[index]!.id)}</a>`;
   const drawnWhere = (test: (sample: HeadSample) => boolean) => {
     const drawn = samples.map((sample, index) => (test(sample) ? index : -1)).filter((index) => index >= 0);
     return drawn.length === 0 ? 'none among the drawn sentences' : drawn.slice(0, 8).map(link).join(' ');
@@ -77,7 +77,7 @@ function drawExample(sample: HeadSample, index: number): string {
   const wrongArcs = new Map([...sample.wrong].map((word) => [word, 'changed']));
   const missedArcs = new Map([...sample.wrong].map((word) => [word, 'missed']));
   return (
-    `<section class="sentence"><h3 id="${anchorOf(index)}">${escapeHtml(sample.id)}</h3><ul class="problems">${problems}</ul>` +
+    `<section class="sentence"><h3 id="${anchorOf(index)}">${shownId(sample.id)}</h3><ul class="problems">${problems}</ul>` +
     `<div class="views">` +
     figure(drawBracketing(sample.tree, wrongPhrases), 'bracketing') +
     figure(drawSentence(sample.converted, 'xpos', wrongArcs), 'converted') +

@@ -20,7 +20,7 @@ describe('drawings for the round-trip report', () => {
 
   it('draws one bar per phrase over the words it spans, and marks the spans asked for', () => {
     const tree = read('(S (NP (DT The) (NN keeper)) (VP (VBD slept)))').trees[0]!;
-    const svg = drawBracketing(tree, new Set(['0:2']), 'lost');
+    const svg = drawBracketing(tree, new Map([['0:2', 'lost']]));
     expect(count(svg, /<rect class="bar/g)).toBe(3);
     expect(count(svg, /<rect class="bar lost"/g)).toBe(1);
     expect(count(svg, /<rect class="word"/g)).toBe(3);
@@ -28,7 +28,7 @@ describe('drawings for the round-trip report', () => {
 
   it('escapes every corpus string: a word like <script> is shown, never run', () => {
     const tree = read('(S (NP (SYM <script>alert(1)</script>)) (VP (VBD slept)))'.replace('alert(1)', 'alert')).trees[0]!;
-    const svg = drawBracketing(tree, new Set(), 'lost');
+    const svg = drawBracketing(tree);
     expect(svg).not.toContain('<script>');
     expect(svg).toContain('&lt;script&gt;');
   });
@@ -41,7 +41,7 @@ describe('drawings for the round-trip report', () => {
       2,
     );
     for (const tree of read('( (S (NP-SBJ (DT The) (NN keeper)) (VP (VBD slept)) (. .)) (ID a.1))').trees) trip.add(tree, tree.id!);
-    const page = writeReport(trip.report(), trip.samples, 2);
+    const page = writeReport(trip.report(), trip.samples);
     expect(page.startsWith('<!DOCTYPE html>')).toBe(true);
     expect(page).not.toMatch(/<link|<script|src=|@import|url\(http/);
     expect(count(page, /<section class="sentence">/g)).toBeGreaterThan(0);
@@ -61,7 +61,7 @@ describe('drawings for the round-trip report', () => {
     expect(trip.samples).toHaveLength(1);
     const changed = trip.samples[0]!.changed;
     expect(changed.size).toBeGreaterThan(0);
-    const page = writeReport(trip.report(), trip.samples, 3);
+    const page = writeReport(trip.report(), trip.samples);
     expect(count(page, /<svg class="dependencies"/g)).toBe(2);
     expect(count(page, /<svg class="bracketing"/g)).toBe(1);
     // The root has no arc to draw; every other changed word has a marked one.
@@ -69,5 +69,24 @@ describe('drawings for the round-trip report', () => {
     const drawnChanged = back.filter((l) => changed.has(Number(l.id)) && l.head !== '0').length;
     expect(drawnChanged).toBeGreaterThan(0);
     expect(count(page, /<path class="arc[a-z ]* changed"/g)).toBe(drawnChanged);
+  });
+
+  it('shortens a label too long for its bar, keeping the whole label on hover and in a line under the drawing', () => {
+    const tree = read('(S (NP-SBJ-LONGNAME (NN Fog)) (VP (VBD lifted)))').trees[0]!;
+    const svg = drawBracketing(tree);
+    expect(svg).toContain('<title>NP-SBJ-LONGNAME</title>');
+    expect(svg).toMatch(/<text class="label"[^>]*>NP-…<\/text>|<text class="label"[^>]*>N[^<]*…<\/text>/);
+    expect(svg).toContain('<p class="labels">shortened: NP-SBJ-LONGNAME</p>');
+    expect(svg).not.toContain('textLength');
+  });
+
+  it('keeps the relation labels of arcs of the same height apart', () => {
+    // Two arcs over one word each, side by side and touching: their labels would meet at the same height.
+    const svg = drawDependencies(['a', 'b', 'c'], ['X', 'X', 'X'], [2, 0, 2], ['dependentlabel', 'root', 'otherlabel'], new Set());
+    const labels = [...svg.matchAll(/<text class="relation" x="([\d.]+)" y="([\d.]+)">/g)].map((m) => ({ x: Number(m[1]), y: Number(m[2]) }));
+    expect(labels).toHaveLength(2);
+    const [first, second] = labels as [{ x: number; y: number }, { x: number; y: number }];
+    const apart = Math.abs(first.x - second.x) > 6.5 * 14 || Math.abs(first.y - second.y) >= 11;
+    expect(apart).toBe(true);
   });
 });
