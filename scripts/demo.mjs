@@ -72,6 +72,11 @@ const steps = [
     expect: 0,
   },
   {
+    say: 'Tuning a head table: the function-head table scored against the demo gold (content heads), with a page linking each kind of error to the sentences drawn with the wrong choices marked.',
+    args: ['heads', 'score', '--heads', 'en-function', '--labels', 'en-ud', 'demo-data/harbour.psd', '--gold', 'demo-data/harbour-gold.conllu', '--report', 'demo-output/harbour-tuning.html'],
+    expect: 0,
+  },
+  {
     say: 'Lossless mode: the whole bracketing rides in MISC, so the way back is exact.',
     args: ['roundtrip', '--lossless', '--heads', 'en-content', 'demo-data/harbour.psd'],
     expect: 0,
