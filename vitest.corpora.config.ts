@@ -8,5 +8,8 @@ export default defineConfig({
     testTimeout: 600_000,
     hookTimeout: 600_000,
     fileParallelism: false,
+    // Commands run in the test process from the TypeScript sources, where there is no built worker
+    // to start: one job. Tests of worker threads run the built command with --jobs.
+    env: { TREEBRIDGE_JOBS: '1' },
   },
 });

@@ -1,8 +1,7 @@
-import { diagnose, diagnoseItem, itemName, type Report } from '../diagnostics/diagnostic.js';
-import { unwritableReason, type Layout } from '../formats/bracketed/write-bracketed.js';
-import { writeTree } from '../traces/write-tree.js';
+import { diagnose, itemName, type Report } from '../diagnostics/diagnostic.js';
+import type { Layout } from '../formats/bracketed/write-bracketed.js';
 import { writeXmlSentence, xmlDocumentEnd, xmlDocumentStart } from '../formats/xml-graph/write-xml-graph.js';
-import { insertTraces } from '../traces/insert-traces.js';
+import { TreeRewriter } from '../api/rewrite.js';
 import type { Tree } from '../model/constituency.js';
 import { LineIndex } from '../model/line-index.js';
 import type { Output } from './io.js';
@@ -25,29 +24,28 @@ export function treeOutputFormat(to: unknown, path: unknown): TreeOutputFormat {
 export class TreeSink {
   private count = 0;
   private opened = false;
-  /** `*ICH*` traces put in to write discontinuous trees as bracketings. */
-  tracesInserted = 0;
+  private readonly rewriter: TreeRewriter;
 
   constructor(
     private readonly output: Output,
     private readonly format: TreeOutputFormat,
-    private readonly layout: Layout,
+    layout: Layout,
     private readonly report: Report,
-  ) {}
+  ) {
+    this.rewriter = new TreeRewriter({ traces: 'keep', layout }, report);
+  }
+
+  /** `*ICH*` traces put in to write discontinuous trees as bracketings. */
+  get tracesInserted(): number {
+    return this.rewriter.tally.inserted;
+  }
 
   /** Writes a tree; false when it could not be written (and was reported). */
   async write(tree: Tree): Promise<boolean> {
     if (this.format === 'bracketed') {
-      if (tree.secondaryEdges && tree.secondaryEdges.length > 0) reportSecondaryEdges(tree, 'bracketing', this.report);
-      const mended = insertTraces(tree);
-      // A label or word a bracketing cannot hold would read back as other words: the tree is reported instead.
-      const reason = unwritableReason(mended.tree);
-      if (reason) {
-        this.report(diagnoseItem('unwritable-tree', `tree ${itemName(tree)} cannot be written as a bracketing: ${reason}`, tree));
-        return false;
-      }
-      this.tracesInserted += mended.traces;
-      await this.output.write(writeTree(mended.tree, { layout: this.layout }));
+      const text = this.rewriter.toBrackets(tree);
+      if (text === '') return false;
+      await this.output.write(text);
       return true;
     }
     await this.open();
@@ -65,6 +63,11 @@ export class TreeSink {
     return true;
   }
 
+  /** Text already written as bracketings elsewhere (by worker threads), in order. */
+  async writeText(text: string): Promise<void> {
+    await this.output.write(text);
+  }
+
   /** Closes the XML document (an empty one when no tree came). */
   async finish(): Promise<void> {
     if (this.format !== 'xml') return;
@@ -77,13 +80,4 @@ export class TreeSink {
     this.opened = true;
     await this.output.write(xmlDocumentStart());
   }
-}
-
-/** A bracketing or a basic dependency tree has no place for secondary edges: each sentence that has some says how many are left out. */
-export function reportSecondaryEdges(tree: Tree, into: string, report: Report): void {
-  const edges = tree.secondaryEdges!;
-  const lines = tree.source ?? new LineIndex('', { offset: 0, line: 1, column: 1 });
-  const labels = [...new Set(edges.map((edge) => edge.label))].join(', ');
-  const offset = edges[0]!.position?.start ?? tree.position?.start ?? 0;
-  report(diagnose('secondary-edges-dropped', `sentence ${itemName(tree)}: ${edges.length} secondary edge${edges.length === 1 ? '' : 's'} (${labels}) left out of the ${into}`, { file: tree.file ?? '-', offset, lines }));
 }

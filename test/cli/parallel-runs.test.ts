@@ -25,7 +25,7 @@ function largeInput(folder: string): string[] {
   return [first, second];
 }
 
-describe('to-deps on worker threads', () => {
+describe('commands on worker threads', () => {
   it('writes what --jobs 1 writes, problems and closing line included, byte for byte', { timeout: 120_000 }, async () => {
     const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
     const files = largeInput(folder);
@@ -40,5 +40,19 @@ describe('to-deps on worker threads', () => {
     expect(three.code).toBe(one.code);
     expect(three.stderr).toBe(one.stderr);
     expect(three.stdout === one.stdout).toBe(true);
+  });
+
+  it('rewrites as --jobs 1 does, traces resolved and put back, byte for byte', { timeout: 120_000 }, async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const files = largeInput(folder);
+    const xml = join(projectRoot, 'demo-data', 'ferry-graphs.xml');
+    const args = ['rewrite', '--traces', 'resolve', '--layout', 'indented', '--lemmas', '--verbose', files[0]!, xml, files[1]!];
+    const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+    const two = await runBin([...args, '--jobs', '2'], { limitMs: 100_000 });
+    expect(one.code).toBe(1);
+    expect(one.stderr).toMatch(/\*ICH\* traces? put in/);
+    expect(two.code).toBe(one.code);
+    expect(two.stderr).toBe(one.stderr);
+    expect(two.stdout === one.stdout).toBe(true);
   });
 });

@@ -1,6 +1,8 @@
+import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
+import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
-import type { ConvertResult, Task } from './tasks.js';
+import type { Task, TaskResult } from './tasks.js';
 
 /** The number of jobs a run uses when none is asked for: TREEBRIDGE_JOBS when set to a whole number, else one per core. */
 export function defaultJobs(): number {
@@ -17,9 +19,16 @@ export function defaultJobs(): number {
 export class WorkerPool {
   private readonly pool: Piscina;
 
+  /** The worker's module; it exists once built (running from the TypeScript sources there is none to start). */
+  static readonly module = new URL('./worker.js', import.meta.url);
+
+  static get available(): boolean {
+    return existsSync(fileURLToPath(WorkerPool.module));
+  }
+
   constructor(readonly threads: number) {
     this.pool = new Piscina({
-      filename: new URL('./worker.js', import.meta.url).href,
+      filename: WorkerPool.module.href,
       minThreads: threads,
       maxThreads: threads,
       // Tasks are queued by the caller, in order and few at a time; the pool needs no queue limit of its own.
@@ -30,8 +39,8 @@ export class WorkerPool {
     });
   }
 
-  run(task: Task): Promise<ConvertResult> {
-    return this.pool.run(task) as Promise<ConvertResult>;
+  run(task: Task): Promise<TaskResult> {
+    return this.pool.run(task) as Promise<TaskResult>;
   }
 
   async close(): Promise<void> {

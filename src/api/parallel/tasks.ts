@@ -6,7 +6,7 @@
 import type { Diagnostic } from '../../diagnostics/diagnostic.js';
 import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
 import type { CutBatch } from '../../formats/bracketed/tree-batches.js';
-import type { ConversionTally, NamingOptions } from '../convert.js';
+import type { NamingOptions } from '../convert.js';
 
 /** Conversion options whose tables are named (shipped name or path), so that a worker can load them. */
 export interface NamedConversionOptions {
@@ -18,25 +18,27 @@ export interface NamedConversionOptions {
   punctuation?: 'phrase' | 'root';
 }
 
-/** Convert the trees of some cut batches of one file to CoNLL-U. */
-export interface ConvertTask {
-  kind: 'convert';
+/** What to do with each tree: convert it to CoNLL-U, or write it again as a bracketing. */
+export type Work =
+  | { kind: 'convert'; conversion: NamedConversionOptions; naming: NamingOptions }
+  | { kind: 'rewrite'; traces: 'keep' | 'resolve'; layout: 'line' | 'indented' };
+
+/** Do the work on the trees of some cut batches of one file. */
+export interface Task {
+  work: Work;
   read: BracketedReadOptions;
-  conversion: NamedConversionOptions;
-  naming: NamingOptions;
   batches: CutBatch[];
 }
 
-/** What became of one batch: the problems found building its trees, those found converting them, and the text. */
-export interface ConvertedBatch {
+/** What became of one batch: the problems found building its trees, those found doing the work, and the text written. */
+export interface DoneBatch {
   built: Diagnostic[];
-  converted: Diagnostic[];
+  done: Diagnostic[];
   text: string;
 }
 
-export interface ConvertResult {
-  batches: ConvertedBatch[];
-  tally: ConversionTally;
+/** The batches of a task, and the counts of what became of their trees (summed over tasks in input order). */
+export interface TaskResult {
+  batches: DoneBatch[];
+  tally: Record<string, number>;
 }
-
-export type Task = ConvertTask;

@@ -5,48 +5,54 @@
  */
 import type { Diagnostic } from '../../diagnostics/diagnostic.js';
 import { buildCutBatch } from '../../formats/bracketed/tree-batches.js';
+import type { Tree } from '../../model/constituency.js';
 import { emptyConversionTally, TreeConverter } from '../convert.js';
 import { resolveConversionOptions, type ResolvedConversion } from '../options.js';
-import type { ConvertResult, ConvertTask, Task } from './tasks.js';
+import { emptyRewriteTally, TreeRewriter } from '../rewrite.js';
+import type { Task, TaskResult, Work } from './tasks.js';
 
 /** Tables are loaded once per worker and options: a run sends the same names with every task. */
 const resolved = new Map<string, ResolvedConversion>();
 
-function conversionOf(task: ConvertTask): ResolvedConversion {
-  const key = JSON.stringify(task.conversion);
+function conversionOf(work: Extract<Work, { kind: 'convert' }>): ResolvedConversion {
+  const key = JSON.stringify(work.conversion);
   let found = resolved.get(key);
   if (!found) {
-    found = resolveConversionOptions(task.conversion);
+    found = resolveConversionOptions(work.conversion);
     resolved.set(key, found);
   }
   return found;
 }
 
-function convert(task: ConvertTask): ConvertResult {
-  const { settings } = conversionOf(task);
-  const tally = emptyConversionTally();
+/** One tree to its text, with the counts of what became of the trees. */
+interface Worker {
+  write(tree: Tree): string;
+  tally: object;
+}
+
+function workerFor(work: Work, report: (diagnostic: Diagnostic) => void): Worker {
+  if (work.kind === 'rewrite') {
+    const rewriter = new TreeRewriter({ traces: work.traces, layout: work.layout }, report, emptyRewriteTally());
+    return { write: (tree) => rewriter.rewrite(tree), tally: rewriter.tally };
+  }
+  const { settings } = conversionOf(work);
+  const options = { heads: settings.heads, labels: settings.labels, posMap: settings.upos, traces: settings.traces, coordination: settings.coordination, punctuation: settings.punctuation, ...work.naming };
+  const converter = new TreeConverter(options, report, emptyConversionTally());
+  return { write: (tree) => converter.convertToText(tree), tally: converter.tally };
+}
+
+/** The entry point the pool calls with each task; the main thread calls it too, for its share. */
+export default function run(task: Task): TaskResult {
   let sink: Diagnostic[] = [];
   const report = (diagnostic: Diagnostic) => sink.push(diagnostic);
-  const converter = new TreeConverter(
-    { heads: settings.heads, labels: settings.labels, posMap: settings.upos, traces: settings.traces, coordination: settings.coordination, punctuation: settings.punctuation, ...task.naming },
-    report,
-    tally,
-  );
+  const worker = workerFor(task.work, report);
   const batches = task.batches.map((batch) => {
     const built: Diagnostic[] = (sink = []);
     const trees = buildCutBatch(batch, task.read, report);
-    const converted: Diagnostic[] = (sink = []);
+    const done: Diagnostic[] = (sink = []);
     let text = '';
-    for (const tree of trees) text += converter.convertToText(tree);
-    return { built, converted, text };
+    for (const tree of trees) text += worker.write(tree);
+    return { built, done, text };
   });
-  return { batches, tally };
-}
-
-/** The entry point the pool calls with each task. */
-export default function run(task: Task): ConvertResult {
-  switch (task.kind) {
-    case 'convert':
-      return convert(task);
-  }
+  return { batches, tally: { ...worker.tally } as Record<string, number> };
 }

@@ -1,12 +1,17 @@
 import { Option, type Command } from 'commander';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
-import { resolveTraces } from '../../traces/resolve-traces.js';
+import { emptyRewriteTally, TreeRewriter } from '../../api/rewrite.js';
+import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
+import { readXmlGraphs } from '../../formats/xml-graph/read-xml-graph.js';
+import type { Tree } from '../../model/constituency.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
+import { formatOf } from '../input-format.js';
+import { addJobsOption, jobsOf } from '../jobs-option.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
-import { readTreesOf } from '../read-trees.js';
+import { readInputs, readTreeBatchesOf } from '../read-trees.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 
 export function registerRewrite(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -18,6 +23,7 @@ export function registerRewrite(program: Command, io: CliIO, done: (result: Comm
     .addOption(new Option('--to <format>', 'output format (default: by the output file\'s extension, .xml is the XML graph encoding; else bracketed)').choices(['bracketed', 'xml']))
     .addOption(new Option('--traces <mode>', 'keep: traces stay empty elements; resolve: antecedents of *T* *ICH* *EXP* *RNR* become discontinuous children where their traces stood').choices(['keep', 'resolve']).default('keep'))
     .option('-o, --output <file>', 'write the trees to a file (default: standard output)');
+  addJobsOption(command);
   addTreeFormatOption(command);
   addListingOptions(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => {
@@ -33,22 +39,40 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
   const layout = options.layout as Layout;
   const problems = new ProblemPrinter(io, listingOf(options));
   const report = problems.report;
-  const sink = new TreeSink(output, treeOutputFormat(options.to, options.output), layout, report);
-  let read = 0;
-  let written = 0;
-  let moved = 0;
-  let leftover = 0;
+  const format = treeOutputFormat(options.to, options.output);
+  const sink = new TreeSink(output, format, layout, report);
+  const traces = options.traces === 'resolve' ? 'resolve' : 'keep';
+  const tally = emptyRewriteTally();
+  // Traces are resolved here; the sink puts *ICH* traces in where a bracketing needs them.
+  const rewriter = new TreeRewriter({ traces, layout }, report, tally);
+  const writeOne = async (tree: Tree) => {
+    if (await sink.write(rewriter.resolve(tree))) tally.written++;
+  };
   try {
-    for await (const tree of readTreesOf(inputs, bracketedReadOptions(options), report, io)) {
-      read++;
-      let resolved = tree;
-      if (options.traces === 'resolve') {
-        const resolution = resolveTraces(tree);
-        moved += resolution.moved;
-        leftover += resolution.leftover;
-        resolved = resolution.tree;
+    const jobs = jobsOf(options);
+    // An XML graph document numbers its sentences as they are written: it is written on one thread.
+    if (jobs > 1 && format === 'bracketed') {
+      const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'rewrite', traces, layout }, report, tally);
+      try {
+        const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string | Tree> {
+          if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
+            yield* parallel.run(pieces, name);
+            return;
+          }
+          // An XML input is rewritten here, after everything before it.
+          yield* parallel.drain();
+          yield* readXmlGraphs(pieces, { file: name }, report);
+        };
+        for await (const item of readInputs(inputs, read, io)) {
+          if (typeof item === 'string') await sink.writeText(item);
+          else await writeOne(item);
+        }
+        for await (const text of parallel.drain()) await sink.writeText(text);
+      } finally {
+        await parallel.close();
       }
-      if (await sink.write(resolved)) written++;
+    } else {
+      for await (const trees of readTreeBatchesOf(inputs, bracketedReadOptions(options), report, io)) for (const tree of trees) await writeOne(tree);
     }
     await sink.finish();
     await output.commit();
@@ -56,10 +80,12 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
     await output.abandon();
     throw error;
   }
+  const { read, written, moved, leftover } = tally;
+  const inserted = tally.inserted + sink.tracesInserted;
   const notes = [
     options.traces === 'resolve' ? `${moved} antecedent${moved === 1 ? '' : 's'} moved to their traces` : '',
     leftover > 0 ? `${leftover} further trace${leftover === 1 ? '' : 's'} of an antecedent that had moved already left as empty element${leftover === 1 ? '' : 's'}` : '',
-    sink.tracesInserted > 0 ? `${sink.tracesInserted} *ICH* trace${sink.tracesInserted === 1 ? '' : 's'} put in for discontinuous phrases` : '',
+    inserted > 0 ? `${inserted} *ICH* trace${inserted === 1 ? '' : 's'} put in for discontinuous phrases` : '',
   ].filter(Boolean);
   problems.printSummary();
   io.stderr.write(closingLine(read, 'tree', [[written, 'written'], [read - written, 'skipped']], notes, problems));

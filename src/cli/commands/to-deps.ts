@@ -8,7 +8,7 @@ import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
 import { readTreeBatchesOf, readInputs } from '../read-trees.js';
-import { ParallelConversion } from '../../api/parallel/parallel-conversion.js';
+import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
 import { readXmlGraphs } from '../../formats/xml-graph/read-xml-graph.js';
 import { formatOf } from '../input-format.js';
 import { addJobsOption, jobsOf } from '../jobs-option.js';
@@ -51,11 +51,11 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
     const jobs = jobsOf(options);
     // Lossless mode carries trees without words across batches: it runs on one thread.
     if (jobs > 1 && !resolved.lossless) {
-      const parallel = new ParallelConversion(jobs, bracketedReadOptions(options), namedConversion(options), naming, problems.report, tally);
+      const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'convert', conversion: namedConversion(options), naming }, problems.report, tally);
       try {
         const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string> {
           if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
-            yield* parallel.convert(pieces, name);
+            yield* parallel.run(pieces, name);
             return;
           }
           // An XML input is converted here, after everything before it.

@@ -1,10 +1,9 @@
 import type { Diagnostic, Report } from '../../diagnostics/diagnostic.js';
 import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
 import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
-import type { ConversionTally, NamingOptions } from '../convert.js';
 import { WorkerPool } from './pool.js';
 import run from './worker.js';
-import type { ConvertResult, NamedConversionOptions } from './tasks.js';
+import type { TaskResult, Work } from './tasks.js';
 
 /** Characters of input per task: enough that sending a task costs little beside converting it. */
 const TASK_SIZE = 64 * 1024;
@@ -12,24 +11,26 @@ const TASK_SIZE = 64 * 1024;
 const SLICE = 4 * 1024;
 
 /** What happened, in input order: a problem of the cutting, a batch built, a batch converted. */
-type Event = { kind: 'problem'; diagnostic: Diagnostic } | { kind: 'built'; batch: number } | { kind: 'converted'; batch: number };
+type Event = { kind: 'problem'; diagnostic: Diagnostic } | { kind: 'built'; batch: number } | { kind: 'done'; batch: number };
 
 /** A run of events and the task converting their batches; the result is awaited in turn. */
 interface Group {
   events: Event[];
-  result: Promise<ConvertResult> | undefined;
+  result: Promise<TaskResult> | undefined;
 }
 
 /**
- * Converts bracketed input to CoNLL-U on worker threads, giving the text,
- * the problems and the tally that converting it on one thread gives, in the
- * same order. The main thread reads and cuts the input into batches of trees
- * (the reader's first half); workers build and convert the batches; results
- * come back in input order. At most a few tasks per worker are in flight, so
+ * Does work on the trees of bracketed input (converting them to CoNLL-U,
+ * writing them again) on worker threads, giving the text, the problems and
+ * the tally that doing it on one thread gives, in the same order. The main
+ * thread reads and cuts the input into batches of trees (the reader's first
+ * half); workers build the trees of the batches and do the work; results come
+ * back in input order. At most a few tasks per worker are in flight, so
  * memory does not grow with the input.
  */
-export class ParallelConversion {
-  private readonly pool: WorkerPool;
+export class ParallelBatches {
+  /** Started when a second task comes: a small input never pays for starting threads. */
+  private pool: WorkerPool | undefined;
   private readonly queue: Group[] = [];
   private readonly inFlight: number;
   private readonly jobs: number;
@@ -40,20 +41,20 @@ export class ParallelConversion {
   constructor(
     jobs: number,
     private readonly read: BracketedReadOptions,
-    private readonly conversion: NamedConversionOptions,
-    private readonly naming: NamingOptions,
+    private readonly work: Work,
     private readonly report: Report,
-    private readonly tally: ConversionTally,
+    /** Counts of what became of the trees, summed over the tasks; the keys are the work's. */
+    private readonly tally: object,
   ) {
     // The main thread is one of the jobs: it converts every jobs-th task itself, between reading and
     // writing, so that N jobs start N - 1 worker threads (each a heap and a copy of the tables).
-    this.jobs = jobs;
-    this.pool = new WorkerPool(jobs - 1);
+    // Without a built worker module (run from the sources), the main thread does all the work.
+    this.jobs = WorkerPool.available ? jobs : 1;
     this.inFlight = jobs * 3;
   }
 
-  /** Converts one input given in pieces; yields CoNLL-U text as it is ready, in order. Results may lag behind the input until {@link drain}. */
-  async *convert(pieces: AsyncIterable<string>, file: string): AsyncGenerator<string> {
+  /** Works through one input given in pieces; yields text as it is ready, in order. Results may lag behind the input until {@link drain}. */
+  async *run(pieces: AsyncIterable<string>, file: string): AsyncGenerator<string> {
     let events: Event[] = [];
     let batches: CutBatch[] = [];
     let size = 0;
@@ -69,12 +70,12 @@ export class ParallelConversion {
       const first = batches.length;
       push();
       // As on one thread: the trees a push completes are converted after every problem of that push.
-      for (let k = 0; k < pushBatches; k++) events.push({ kind: 'converted', batch: first + k });
+      for (let k = 0; k < pushBatches; k++) events.push({ kind: 'done', batch: first + k });
     };
     const submit = () => {
       if (events.length === 0) return;
-      const task = { kind: 'convert' as const, read: { ...this.read, file }, conversion: this.conversion, naming: this.naming, batches };
-      const result = batches.length === 0 ? undefined : this.submitted++ % this.jobs === this.jobs - 1 ? Promise.resolve(run(task)) : this.pool.run(task);
+      const task = { work: this.work, read: { ...this.read, file }, batches };
+      const result = batches.length === 0 ? undefined : this.submitted++ % this.jobs === 0 ? Promise.resolve(run(task)) : this.workers().run(task);
       this.queue.push({ events, result });
       events = [];
       batches = [];
@@ -94,6 +95,11 @@ export class ParallelConversion {
     while (this.queue.length > this.inFlight) yield await this.emitFirst();
   }
 
+  private workers(): WorkerPool {
+    this.pool ??= new WorkerPool(this.jobs - 1);
+    return this.pool;
+  }
+
   /** Waits for every task still running and yields their text, in order. */
   async *drain(): AsyncGenerator<string> {
     while (this.queue.length > 0) yield await this.emitFirst();
@@ -101,7 +107,7 @@ export class ParallelConversion {
 
   /** Stops the workers. */
   async close(): Promise<void> {
-    await this.pool.close();
+    await this.pool?.close();
   }
 
   /** Reports the problems of the first group in order and gives its text. */
@@ -113,12 +119,13 @@ export class ParallelConversion {
       if (event.kind === 'problem') this.emit(event.diagnostic);
       else if (event.kind === 'built') for (const diagnostic of result!.batches[event.batch]!.built) this.emit(diagnostic);
       else {
-        const converted = result!.batches[event.batch]!;
-        for (const diagnostic of converted.converted) this.emit(diagnostic);
-        text += converted.text;
+        const done = result!.batches[event.batch]!;
+        for (const diagnostic of done.done) this.emit(diagnostic);
+        text += done.text;
       }
     }
-    if (result) for (const key of ['read', 'converted', 'carried', 'skipped'] as const) this.tally[key] += result.tally[key];
+    const tally = this.tally as Record<string, number>;
+    if (result) for (const [key, count] of Object.entries(result.tally)) tally[key] = (tally[key] ?? 0) + count;
     return text;
   }
 
