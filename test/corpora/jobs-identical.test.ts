@@ -1,0 +1,32 @@
+// --jobs N writes what --jobs 1 writes, byte for byte, problems and closing line included, on all
+// shared bracketed corpora: IcePaHC (CC BY 4.0) and GUM constituency trees (CC BY 4.0). The
+// commands with worker threads are to-deps and rewrite; the others run on one thread.
+import { describe, expect, it } from 'vitest';
+import { runBin } from '../support/bin.js';
+import { corpusFiles } from '../support/corpora.js';
+
+const corpora = [
+  ['IcePaHC', () => corpusFiles('icepahc', '.psd'), ['--lemmas']],
+  ['GUM', () => corpusFiles('gum/const', '.ptb'), []],
+] as const;
+
+const commands = [
+  ['to-deps', (name: string) => (name === 'IcePaHC' ? ['--heads', 'penn-historical', '--labels', 'penn-historical', '--pos-map', 'penn-historical'] : ['--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb'])],
+  ['rewrite', () => ['--traces', 'resolve']],
+] as const;
+
+describe('worker threads on the shared corpora', () => {
+  for (const [name, files, read] of corpora) {
+    for (const [command, options] of commands) {
+      it(`${command} of ${name}: --jobs 3 gives the bytes of --jobs 1`, async () => {
+        const args = [command, ...options(name), ...read, '--verbose', ...files()];
+        const one = await runBin([...args, '--jobs', '1'], { limitMs: 300_000 });
+        const three = await runBin([...args, '--jobs', '3'], { limitMs: 300_000 });
+        expect(one.stdout.length).toBeGreaterThan(1_000_000);
+        expect(three.code).toBe(one.code);
+        expect(three.stderr).toBe(one.stderr);
+        expect(three.stdout === one.stdout).toBe(true);
+      });
+    }
+  }
+});
