@@ -43,7 +43,7 @@ function decideHead(
     if (coordination && style !== 'table' && coordinationHead(coordination, style) === chosen) phrase.coordination = coordination;
     return { child: chosen, reason: 'oracle: the child holding the gold head' };
   }
-  const choice = chooseFrom(candidates, phrase.category, table);
+  const choice = chooseFrom(candidates, phrase, table);
   if (style === 'table') return choice;
   const coordination = findCoordination(phrase, candidates, table);
   if (!coordination) return choice;
@@ -58,14 +58,17 @@ function decideHead(
 }
 
 export function chooseHead(phrase: PhraseNode, table: HeadTable): HeadChoice {
-  return chooseFrom(phrase.children.map(candidateOf), phrase.category, table);
+  return chooseFrom(phrase.children.map(candidateOf), phrase, table);
 }
 
-/** The head a table chooses among candidates for a parent category (no coordination styling). */
-export function chooseFrom(candidates: Candidate[], category: string, table: HeadTable): HeadChoice {
-  const own = table.blocks.get(category);
+/** The label of the phrase being decided, as `for` patterns see it (its head word is not known yet). */
+export type ParentLabel = Pick<Candidate, 'category' | 'functions'>;
+
+/** The head a table chooses among candidates for a parent phrase (no coordination styling). */
+export function chooseFrom(candidates: Candidate[], parent: ParentLabel, table: HeadTable): HeadChoice {
+  const own = table.blocks.get(parent.category);
   for (const block of own ? [own, table.fallback] : [table.fallback]) {
-    const found = searchBlock(block, candidates, table);
+    const found = searchBlock(block, candidates, parent, table);
     if (found) return adjustForCoordination(found, candidates, table);
   }
   return { child: firstContent(candidates, table, 'left'), reason: 'no step chose: first child that is not punctuation' };
@@ -88,7 +91,8 @@ class StepChoice implements HeadChoice {
   get reason(): string {
     const { block, step, pattern } = this;
     const written = step.written.length ? ' ' + step.written.join(' ') : '';
-    const guard = (step.guards.length ? ' (if a child matches)' : '') + (step.vetoes.length ? ' (unless a child matches)' : '');
+    const guard =
+      (step.guards.length ? ' (if a child matches)' : '') + (step.vetoes.length ? ' (unless a child matches)' : '') + (step.phrases.length ? ' (for this phrase label)' : '');
     const matched = pattern === undefined ? '' : ` [matched ${step.written[pattern]}]`;
     return `${block.categories.join(' ')} (line ${step.line}): ${step.end} ${step.mode}${written}${guard}${matched}${this.then}`;
   }
@@ -103,9 +107,10 @@ function chosen(child: number, block: HeadBlock, step: HeadStep, pattern: number
   return new StepChoice(child, block, step, pattern);
 }
 
-function searchBlock(block: HeadBlock, candidates: Candidate[], table: HeadTable): StepChoice | undefined {
+function searchBlock(block: HeadBlock, candidates: Candidate[], parent: ParentLabel, table: HeadTable): StepChoice | undefined {
   const n = candidates.length;
   for (const step of block.steps) {
+    if (step.phrases.length > 0 && !step.phrases.some((pattern) => pattern(parent))) continue;
     if (step.guards.length > 0 && !candidates.some((c) => step.guards.some((guard) => guard(c)))) continue;
     if (step.vetoes.length > 0 && candidates.some((c) => step.vetoes.some((veto) => veto(c)))) continue;
     const fromLeft = step.end === 'left';

@@ -1,6 +1,6 @@
 import type { Report } from '../diagnostics/diagnostic.js';
 import type { ConversionSettings } from '../convert/convert-tree.js';
-import { findHeads, candidateOf, chooseFrom } from '../convert/find-heads.js';
+import { findHeads, candidateOf, chooseFrom, type ParentLabel } from '../convert/find-heads.js';
 import { phrasesBottomUp } from '../convert/conversion-tree.js';
 import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
 import { oracleChooser } from '../convert/oracle-heads.js';
@@ -13,6 +13,8 @@ import type { HeadTable } from '../tables/table-model.js';
 
 /** One phrase of the training data: its children and which of them holds the gold head. */
 interface Sample {
+  /** The phrase's own label (`for` steps of the base table look at it). */
+  parent: ParentLabel;
   candidates: Candidate[];
   gold: number;
 }
@@ -61,7 +63,7 @@ export async function collectPhrases(
       const goldChild = oracle(node);
       if (goldChild === undefined || goldChild < 0) continue;
       const list = samples.get(node.category) ?? [];
-      list.push({ candidates: node.children.map(candidateOf), gold: goldChild });
+      list.push({ parent: { category: node.category, functions: node.functions }, candidates: node.children.map(candidateOf), gold: goldChild });
       samples.set(node.category, list);
     }
   }
@@ -153,7 +155,7 @@ export function learnBlock(category: string, samples: Sample[], table: HeadTable
   const leftRight = (end: 'left' | 'right') => pool.filter((s) => firstContent(s.candidates, end, punctuation) === s.gold).length;
   const block: LearnedBlock = { category, steps, fallback: leftRight('left') >= leftRight('right') ? 'left' : 'right', phrases: samples.length, baseRight: 0, learnedRight: 0 };
   for (const sample of samples) {
-    if (chooseFrom(sample.candidates, category, table).child === sample.gold) block.baseRight++;
+    if (chooseFrom(sample.candidates, sample.parent, table).child === sample.gold) block.baseRight++;
     if (predict(block, sample.candidates, punctuation) === sample.gold) block.learnedRight++;
   }
   return block;

@@ -126,7 +126,7 @@ class TableLoader {
       kind: 'heads',
       name: path,
       blocks: new Map(),
-      fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], guards: [], vetoes: [], written: [], file: 'built in', line: 0 }] },
+      fallback: { categories: ['*'], steps: [{ end: 'left', mode: 'first', patterns: [], guards: [], vetoes: [], phrases: [], written: [], file: 'built in', line: 0 }] },
       punctuation: () => false,
       coordinators: () => false,
       coordinationRule: undefined,
@@ -270,18 +270,23 @@ class TableLoader {
   private step(statement: StatementSyntax): HeadStep | undefined {
     const [how, ...rest] = statement.words;
     const mode = how!.text;
-    // Patterns, then optionally `if PATTERN...`, then optionally `unless PATTERN...`.
-    const ifAt = rest.findIndex((w) => w.text === 'if');
-    const unlessAt = rest.findIndex((w) => w.text === 'unless');
-    const patternsEnd = [ifAt, unlessAt].filter((i) => i !== -1).reduce((a, b) => Math.min(a, b), rest.length);
+    // Patterns, then optionally `if PATTERN...`, `unless PATTERN...` and `for PATTERN...`, in any order.
+    const clauseAt = (keyword: string) => rest.findIndex((w) => w.text === keyword);
+    const starts = ['if', 'unless', 'for'].map(clauseAt);
+    const patternsEnd = starts.filter((i) => i !== -1).reduce((a, b) => Math.min(a, b), rest.length);
     const patternWords = rest.slice(0, patternsEnd);
-    const guardWords = ifAt === -1 ? [] : rest.slice(ifAt + 1, unlessAt > ifAt ? unlessAt : rest.length);
-    const vetoWords = unlessAt === -1 ? [] : rest.slice(unlessAt + 1, ifAt > unlessAt ? ifAt : rest.length);
-    for (const [at, found] of [[ifAt, guardWords], [unlessAt, vetoWords]] as const) {
-      if (at !== -1 && found.length === 0) {
+    const clause = (at: number) => (at === -1 ? [] : rest.slice(at + 1, starts.filter((i) => i > at).reduce((a, b) => Math.min(a, b), rest.length)));
+    const [guardWords, vetoWords, phraseWords] = starts.map(clause) as [WordSyntax[], WordSyntax[], WordSyntax[]];
+    for (const at of starts) {
+      if (at !== -1 && clause(at).length === 0) {
         this.problem('table-invalid', rest[at]!, `"${rest[at]!.text}" needs at least one pattern after it`);
         return undefined;
       }
+    }
+    const tested = phraseWords.find((w) => w.text.includes('['));
+    if (tested) {
+      this.problem('table-invalid', tested, '"for" patterns name the labels of the phrase itself, whose head word is not known yet: no [key=value] test');
+      return undefined;
     }
     if (mode !== 'each' && mode !== 'any' && mode !== 'only' && mode !== 'first') {
       this.problem('table-invalid', how!, `"${mode}" is not a way to look: each, any, only or first`);
@@ -298,13 +303,15 @@ class TableLoader {
     const patterns = patternWords.map((w) => this.pattern(w));
     const guards = guardWords.map((w) => this.pattern(w));
     const vetoes = vetoWords.map((w) => this.pattern(w));
-    if ([...patterns, ...guards, ...vetoes].some((p) => p === undefined)) return undefined;
+    const phrases = phraseWords.map((w) => this.pattern(w));
+    if ([...patterns, ...guards, ...vetoes, ...phrases].some((p) => p === undefined)) return undefined;
     return {
       end: statement.keyword as 'left' | 'right',
       mode,
       patterns: patterns as Matcher[],
       guards: guards as Matcher[],
       vetoes: vetoes as Matcher[],
+      phrases: phrases as Matcher[],
       written: patternWords.map((w) => w.text),
       file: this.link.file,
       line: statement.line,

@@ -15,6 +15,11 @@ export interface HeadStep {
   guards: Matcher[];
   /** The step does not apply when some child matches one of these (`unless` patterns). */
   vetoes: Matcher[];
+  /**
+   * The step applies only to phrases whose own label matches one of these
+   * (`for` patterns, labels only: `IP-SUB`, `*-SPE`); empty: to every phrase of the block.
+   */
+  phrases: Matcher[];
   /** The patterns as written, for explanations. */
   written: string[];
   /** Where the step stands: file and 1-based line. */

@@ -6,7 +6,7 @@ import { analyseTree } from '../../src/analysis/structure.js';
 import { convertTree } from '../../src/convert/convert-tree.js';
 import { loadHeadTable } from '../../src/tables/load-table.js';
 import { projectRoot } from '../support/corpora.js';
-import { arcs } from '../support/convert.js';
+import { arcs, headOf } from '../support/convert.js';
 import { read } from '../support/read.js';
 
 const harbour = read(readFileSync(join(projectRoot, 'demo-data/harbour.psd'), 'utf8')).trees;
@@ -66,5 +66,43 @@ describe('converting a tree', () => {
       'The→ferry/det', 'ferry→left/nsubj', 'left→ROOT/root', 'the→harbour/det', 'harbour→left/obj', '.→left/punct',
     ]);
     expect(arcs(text, 'en-content')).toEqual(['The→ferry/dep', 'ferry→left/sbj', 'left→ROOT/root', 'the→harbour/dep', 'harbour→left/dep', '.→left/dep']);
+  });
+});
+
+// Clauses without a lexical verb in the Penn-Helsinki style: which child heads depends on the kind of
+// clause, as the scheme's UD version draws it (measured against ../shared/corpora/icepahc-ud by the
+// corpus tier; these invented sentences pin each choice of penn-historical.heads).
+describe('clause heads of penn-historical', () => {
+  const head = (text: string) => headOf(`( ${text} (ID c.1))`, 'penn-historical');
+
+  it('a lexical verb heads any clause, direct speech included', () => {
+    expect(head('(IP-MAT-SPE (NP-SBJ (PRO-N we)) (MDPI shall) (VB sail) (PP (P to) (NP (N-D harbour))))')).toBe('sail');
+  });
+
+  it('a main clause with be: a prepositional predicate before a predicate noun or adjective', () => {
+    expect(head('(IP-MAT (NP-SBJ (N-N keeper)) (BEDI was) (ADJP (ADJ-N glad)) (PP (P in) (NP (N-D harbour))))')).toBe('harbour');
+    expect(head('(IP-MAT (NP-SBJ (N-N keeper)) (BEDI was) (NP-PRD (N-N pilot)))')).toBe('pilot');
+  });
+
+  it('a subordinate clause with be: the predicate noun or adjective, else the subject', () => {
+    expect(head('(IP-SUB (NP-SBJ (N-N keeper)) (BEDI was) (PP (P in) (NP (N-D harbour))))')).toBe('keeper');
+    expect(head('(IP-SUB (NP-SBJ (N-N keeper)) (BEDI was) (ADJP (ADJ-N glad)))')).toBe('glad');
+  });
+
+  it('direct speech: an adjective phrase, else the subject or predicate noun that comes first', () => {
+    expect(head('(IP-MAT-SPE (NP-SBJ (PRO-N it)) (BEPI is) (NP-PRD (N-N ferry)))')).toBe('it');
+    expect(head('(IP-MAT-SPE (NP-PRD (N-N ferry)) (BEPI is) (NP-SBJ (PRO-N it)))')).toBe('ferry');
+    expect(head('(IP-MAT-SPE (NP-SBJ (PRO-N it)) (BEPI is) (ADJP (ADJ-N late)))')).toBe('late');
+  });
+
+  it('subordinate direct speech: have, else the subject or be, whichever comes first', () => {
+    expect(head('(IP-SUB-SPE (NP-SBJ (PRO-N we)) (HVPI have) (NP-OB1 (N-A rope)))')).toBe('have');
+    expect(head('(IP-SUB-SPE (NP-SBJ (N-N ferry)) (BEPI is) (ADJP (ADJ-N late)))')).toBe('ferry');
+    expect(head('(IP-SUB-SPE (BEPI is) (NP-SBJ (N-N ferry)) (ADJP (ADJ-N late)))')).toBe('is');
+  });
+
+  it('a passive participle heads its clause; after have, the participle of be heads a subordinate clause', () => {
+    expect(head('(IP-MAT (NP-SBJ (N-N ferry)) (BEDI was) (VAN moored) (PP (P in) (NP (N-D harbour))))')).toBe('moored');
+    expect(head('(IP-SUB (NP-SBJ (N-N keeper)) (HVDI had) (BEN been) (PP (P in) (NP (N-D harbour))))')).toBe('been');
   });
 });

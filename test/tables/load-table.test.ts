@@ -31,6 +31,29 @@ describe('the table language', () => {
     expect(headOf('(NP (DT the) (NNP Holm) (NNP Ferry))', 'en-content')).toBe('Ferry');
   });
 
+  it('applies a step with `for` only to phrases whose own label matches, and explains it', async () => {
+    const { chooseFrom, candidateOf } = await import('../../src/convert/find-heads.js');
+    const { prepareTree } = await import('../../src/convert/prepare-tree.js');
+    const { read } = await import('../support/read.js');
+    const table = compileHeadTable(['table t', 'head S', '  left each NP-SBJ for S-SPE *-QUO', '  left any VB*', '  left first'].join('\n'));
+    const decide = (text: string) => {
+      const root = prepareTree(read(text).trees[0]!, 'keep')!.root;
+      if (root.kind !== 'phrase') throw new Error('not a phrase');
+      const choice = chooseFrom(root.children.map(candidateOf), root, table);
+      return [root.children[choice.child]!.kind === 'phrase' ? 'NP-SBJ' : 'VBD', choice.reason];
+    };
+    expect(decide('(S-SPE (NP-SBJ (NN keeper)) (VBD said))')).toEqual(['NP-SBJ', 'S (line 3): left each NP-SBJ (for this phrase label) [matched NP-SBJ]']);
+    expect(decide('(S-TPC-QUO (NP-SBJ (NN keeper)) (VBD said))')[0]).toBe('NP-SBJ');
+    expect(decide('(S (NP-SBJ (NN keeper)) (VBD said))')[0]).toBe('VBD');
+  });
+
+  it('refuses a `for` pattern with a head-word test, and a `for` without patterns', () => {
+    expect(problems(() => compileHeadTable('table t\nhead S\n  left any VB* for S[pos=VBD]\n'))).toEqual([
+      expect.stringMatching(/^table-invalid@3:20: "for" patterns name the labels of the phrase itself/),
+    ]);
+    expect(problems(() => compileHeadTable('table t\nhead S\n  left any VB* if NP for\n'))).toEqual([expect.stringMatching(/^table-invalid@3:22: "for" needs at least one pattern/)]);
+  });
+
   it('reports a line that is not a statement with its line and column', () => {
     expect(problems(() => compileHeadTable('table t\nhead NP\n  Left any NN\n'))).toEqual([
       expect.stringMatching(/^table-syntax@3:3: /),
