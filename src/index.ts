@@ -92,7 +92,7 @@ export { BracketedValidator } from './validate/validate-bracketed.js';
 export type { BracketSample, DependencySample, LossKind, RoundTripReport, RoundTripSample } from './evaluate/roundtrip.js';
 export type { AttachmentScore } from './evaluate/score-attachments.js';
 export { AttachmentScorer } from './evaluate/score-attachments.js';
-export type { LearnedBlock } from './evaluate/suggest-heads.js';
+export type { LearnedBlock, LearnedList } from './evaluate/suggest-heads.js';
 export { lossKinds } from './evaluate/roundtrip.js';
 export type { ConversionScore, AttachmentError, ParentTally } from './evaluate/score-conversion.js';
 export type { PairingTally } from './evaluate/pair-with-gold.js';

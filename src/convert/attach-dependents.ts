@@ -15,10 +15,7 @@ function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: No
   for (const phrase of phrasesBottomUp(root)) {
     for (const child of phrase.children) {
       if (child.kind !== 'phrase') continue;
-      if (!rule.under(candidateOf(phrase)) || !rule.clause(candidateOf(child))) continue;
-      const candidates = child.children.map(candidateOf);
-      if (candidates.some((c) => rule.without(c))) continue;
-      const subjectIndex = candidates.findIndex((c) => rule.subject(c));
+      const subjectIndex = raisedSubject(phrase, child, rule);
       if (subjectIndex === -1 || subjectIndex === child.head?.child) continue;
       const subject = child.children[subjectIndex]!;
       const word = headWordOf(subject);
@@ -26,6 +23,17 @@ function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: No
       attachments[word.index - 1] = { dependent: word, governor: headWordOf(phrase), node: subject, parent: phrase, headNode, role: 'raised' };
     }
   }
+}
+
+/**
+ * The child of a clause whose subject the rule raises to the phrase above
+ * (`phrase` holds `clause`), or -1 when the rule does not apply there.
+ */
+export function raisedSubject(phrase: PhraseNode, clause: PhraseNode, rule: NonNullable<HeadTable['raising']>): number {
+  if (!rule.under(candidateOf(phrase)) || !rule.clause(candidateOf(clause))) return -1;
+  const candidates = clause.children.map(candidateOf);
+  if (candidates.some((c) => rule.without(c))) return -1;
+  return candidates.findIndex((c) => rule.subject(c));
 }
 
 /** A word's attachment to its head word, with what the label table looks at. */

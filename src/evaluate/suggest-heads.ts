@@ -1,7 +1,8 @@
 import type { Report } from '../diagnostics/diagnostic.js';
 import type { ConversionSettings } from '../convert/convert-tree.js';
 import { findHeads, candidateOf, chooseFrom, type ParentLabel } from '../convert/find-heads.js';
-import { phrasesBottomUp } from '../convert/conversion-tree.js';
+import { phrasesBottomUp, type ConversionNode } from '../convert/conversion-tree.js';
+import { raisedSubject } from '../convert/attach-dependents.js';
 import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
 import { oracleChooser } from '../convert/oracle-heads.js';
 import { prepareTree } from '../convert/prepare-tree.js';
@@ -19,11 +20,40 @@ interface Sample {
   gold: number;
 }
 
-/** A learned block: categories to look for, each from an end, then a last resort. */
+/**
+ * One learned step: look from an end for a child with a feature (`NP`,
+ * `NP-PRD`, `*-PRD`, or a word test such as `WHNP[form=what]`), only in phrases
+ * with a child that has the guard feature, when there is one (`if VBZ[form=is]`).
+ */
+export interface LearnedStep {
+  category: string;
+  end: 'left' | 'right';
+  guard?: string;
+  hits: number;
+  misses: number;
+}
+
+/** A learned priority list: categories to look for, each from an end, then a last resort. */
+export interface LearnedList {
+  /**
+   * The function tags a phrase's own label must carry for this list to apply
+   * (written `for IP-SUB-SPE`); empty: the list for every phrase of the category.
+   */
+  functions: string[];
+  steps: LearnedStep[];
+  fallback: 'left' | 'right';
+  /** Phrases this list decides. */
+  phrases: number;
+}
+
+/**
+ * A learned block: lists for kinds of phrase that the data shows are headed
+ * differently (the most specific first: `IP-SUB-SPE` before `IP-SUB`), then
+ * the list for all other phrases of the category.
+ */
 export interface LearnedBlock {
   category: string;
-  steps: Array<{ category: string; end: 'left' | 'right'; hits: number; misses: number }>;
-  fallback: 'left' | 'right';
+  lists: LearnedList[];
   phrases: number;
   /** Phrases whose gold head child the base table chooses, and the learned block. */
   baseRight: number;
@@ -58,8 +88,17 @@ export async function collectPhrases(
     sentences++;
     const oracle = oracleChooser(heads);
     findHeads(prepared.root, settings.heads, settings.coordination, oracle);
+    // A clause whose subject the table raises to the verb above holds its gold head in the subject,
+    // yet is headed by its predicate: it teaches nothing about head choice.
+    const raising = new Set<ConversionNode>();
+    const rule = settings.heads.raising;
+    if (rule) {
+      for (const node of phrasesBottomUp(prepared.root)) {
+        for (const child of node.children) if (child.kind === 'phrase' && raisedSubject(node, child, rule) !== -1) raising.add(child);
+      }
+    }
     for (const node of phrasesBottomUp(prepared.root)) {
-      if (node.coordination || !node.head || node.head.reason.startsWith('coordination')) continue;
+      if (node.coordination || !node.head || node.head.reason.startsWith('coordination') || raising.has(node)) continue;
       const goldChild = oracle(node);
       if (goldChild === undefined || goldChild < 0) continue;
       const list = samples.get(node.category) ?? [];
@@ -70,13 +109,19 @@ export async function collectPhrases(
   return { samples, sentences, misaligned: tally.misaligned };
 }
 
-/** The index a learned block chooses among candidates. */
-function predict(block: LearnedBlock, candidates: Candidate[], isPunctuation: (c: Candidate) => boolean): number {
-  for (const step of block.steps) {
+/** The list of a block that decides a phrase: the first whose function tags its label carries. */
+function listFor(lists: readonly LearnedList[], parent: ParentLabel): LearnedList | undefined {
+  return lists.find((list) => list.functions.every((tag) => parent.functions.includes(tag)));
+}
+
+/** The index a learned list chooses among candidates. */
+function predict(list: LearnedList, candidates: Candidate[], isPunctuation: (c: Candidate) => boolean): number {
+  for (const step of list.steps) {
+    if (step.guard !== undefined && !candidates.some((c) => hasFeature(c, step.guard!))) continue;
     const index = findFrom(candidates, step.category, step.end);
     if (index !== -1) return index;
   }
-  return firstContent(candidates, block.fallback, isPunctuation);
+  return firstContent(candidates, list.fallback, isPunctuation);
 }
 
 /** What a learned step can look for: a category (`NP`), a category with a function tag (`NP-PRD`), or a function tag (`*-PRD`). */
@@ -84,8 +129,40 @@ function featuresOf(candidate: Candidate): string[] {
   return [candidate.category, ...candidate.functions.flatMap((tag) => [`${candidate.category}-${tag}`, `*-${tag}`])];
 }
 
+/** The word test of a child by its head word's form (`VBZ[form=is]`), as a table writes it. */
+function wordFeature(candidate: Candidate): string | undefined {
+  const form = candidate.headWord?.form.toLowerCase();
+  // Forms a pattern cannot hold are never tested.
+  if (!form || /[\s[\],=*]/.test(form)) return undefined;
+  return `${candidate.category}[form=${form}]`;
+}
+
+/**
+ * The word tests worth learning in some phrases: the forms that make up a
+ * good share of their category there (function words: `is` among VBZ,
+ * `what` among WHNP), seen often enough; open-class words never qualify.
+ */
+function frequentWords(samples: readonly Sample[], support: number): Set<string> {
+  const byCategory = new Map<string, number>();
+  const byWord = new Map<string, number>();
+  for (const sample of samples) {
+    for (const candidate of sample.candidates) {
+      byCategory.set(candidate.category, (byCategory.get(candidate.category) ?? 0) + 1);
+      const word = wordFeature(candidate);
+      if (word) byWord.set(word, (byWord.get(word) ?? 0) + 1);
+    }
+  }
+  const words = new Set<string>();
+  for (const [word, count] of byWord) {
+    const category = word.slice(0, word.indexOf('['));
+    if (count >= Math.max(support, 20) && count >= 0.03 * byCategory.get(category)!) words.add(word);
+  }
+  return words;
+}
+
 function hasFeature(candidate: Candidate, feature: string): boolean {
   if (feature === candidate.category) return true;
+  if (feature.endsWith(']')) return wordFeature(candidate) === feature;
   if (feature.startsWith('*-')) return candidate.functions.includes(feature.slice(2));
   return candidate.functions.some((tag) => feature === `${candidate.category}-${tag}`);
 }
@@ -109,54 +186,118 @@ function firstContent(candidates: Candidate[], end: 'left' | 'right', isPunctuat
 }
 
 /**
- * Learns a priority list for one parent category, greedily: the category
- * (and end) that decides the most remaining phrases rightly, net of those it
- * decides wrongly, goes next; the phrases it decides leave the pool.
+ * Learns a priority list from phrases, greedily: the category (and end) that
+ * decides the most remaining phrases rightly, net of those it decides
+ * wrongly, goes next; the phrases it decides leave the pool.
  */
-export function learnBlock(category: string, samples: Sample[], table: HeadTable, minimumSupport = 3): LearnedBlock {
+function learnList(samples: Sample[], functions: string[], table: HeadTable, minimumSupport: number): LearnedList {
   const punctuation = table.punctuation;
   let pool = samples;
-  const steps: LearnedBlock['steps'] = [];
+  const steps: LearnedStep[] = [];
+  const words = frequentWords(samples, minimumSupport);
   for (;;) {
+    // Counts of right and wrong choices per step (feature, and guard after a tab), per end.
     const counts = new Map<string, { left: [number, number]; right: [number, number] }>();
     for (const sample of pool) {
-      const seen = new Set<string>();
+      const features = new Set<string>();
+      const guards: Array<string | undefined> = [undefined];
       for (const candidate of sample.candidates) {
         if (punctuation(candidate)) continue;
-        for (const feature of featuresOf(candidate)) {
-          if (seen.has(feature)) continue;
-          seen.add(feature);
-          const entry = counts.get(feature) ?? { left: [0, 0], right: [0, 0] };
-          for (const end of ['left', 'right'] as const) {
-            const chosen = findFrom(sample.candidates, feature, end);
-            entry[end][chosen === sample.gold ? 0 : 1]++;
-          }
-          counts.set(feature, entry);
+        for (const feature of featuresOf(candidate)) features.add(feature);
+        const word = wordFeature(candidate);
+        if (word && words.has(word)) {
+          features.add(word);
+          if (!guards.includes(word)) guards.push(word);
+        }
+      }
+      for (const feature of features) {
+        const chosen = { left: findFrom(sample.candidates, feature, 'left'), right: findFrom(sample.candidates, feature, 'right') };
+        for (const guard of guards) {
+          if (guard === feature) continue;
+          const key = guard === undefined ? feature : `${feature}\t${guard}`;
+          const entry = counts.get(key) ?? { left: [0, 0], right: [0, 0] };
+          for (const end of ['left', 'right'] as const) entry[end][chosen[end] === sample.gold ? 0 : 1]++;
+          counts.set(key, entry);
         }
       }
     }
-    // The most precise feature with enough support goes next: a rarer but surer sign (a copula's
-    // predicate) must come before a commoner, less sure one (any verb).
+    // The most precise step with enough support goes next: a rarer but surer sign (a copula's
+    // predicate) must come before a commoner, less sure one (any verb). A guarded step must be
+    // surer than the same step without its guard.
     const support = Math.max(minimumSupport, Math.ceil(pool.length * 0.002));
-    let best: { category: string; end: 'left' | 'right'; hits: number; misses: number } | undefined;
+    let best: LearnedStep | undefined;
     const precision = (x: { hits: number; misses: number }) => x.hits / (x.hits + x.misses);
-    for (const [name, entry] of counts) {
+    for (const [key, entry] of counts) {
+      const [category, guard] = key.split('\t') as [string, string | undefined];
       for (const end of ['left', 'right'] as const) {
         const [hits, misses] = entry[end];
-        if (hits < support || hits <= misses) continue;
-        const candidate = { category: name, end, hits, misses };
+        // A step that tests words must be borne out by more phrases than one that tests labels.
+        const needed = category.endsWith(']') ? Math.max(support, 30, Math.ceil(pool.length * 0.003)) : support;
+        if (hits < needed || hits <= misses) continue;
+        const candidate: LearnedStep = guard === undefined ? { category, end, hits, misses } : { category, end, guard, hits, misses };
+        if (guard !== undefined) {
+          const plain = counts.get(category)![end];
+          if (precision(candidate) <= precision({ hits: plain[0], misses: plain[1] }) + 0.05) continue;
+        }
         if (!best || precision(candidate) > precision(best) || (precision(candidate) === precision(best) && hits > best.hits)) best = candidate;
       }
     }
     if (!best) break;
     steps.push(best);
-    pool = pool.filter((sample) => !sample.candidates.some((c) => hasFeature(c, best!.category)));
+    const decided = best;
+    pool = pool.filter(
+      (sample) =>
+        !(sample.candidates.some((c) => hasFeature(c, decided.category)) && (decided.guard === undefined || sample.candidates.some((c) => hasFeature(c, decided.guard!)))),
+    );
   }
   const leftRight = (end: 'left' | 'right') => pool.filter((s) => firstContent(s.candidates, end, punctuation) === s.gold).length;
-  const block: LearnedBlock = { category, steps, fallback: leftRight('left') >= leftRight('right') ? 'left' : 'right', phrases: samples.length, baseRight: 0, learnedRight: 0 };
+  return { functions, steps, fallback: leftRight('left') >= leftRight('right') ? 'left' : 'right', phrases: samples.length };
+}
+
+/** Phrases a list decides rightly. */
+function rightBy(list: LearnedList, samples: readonly Sample[], table: HeadTable): number {
+  return samples.filter((sample) => predict(list, sample.candidates, table.punctuation) === sample.gold).length;
+}
+
+/**
+ * Learns the block of one parent category. Where the phrases of one kind
+ * (the same function tags on their own label: IP-SUB, IP-MAT-SPE) are headed
+ * differently from the rest, that kind gets a list of its own, tried first,
+ * when it has enough phrases and its own list decides clearly more of them
+ * rightly than the list learned on all phrases; then the list for the rest.
+ */
+export function learnBlock(category: string, samples: Sample[], table: HeadTable, minimumSupport = 3): LearnedBlock {
+  const general = learnList(samples, [], table, minimumSupport);
+  const kinds = new Map<string, Sample[]>();
+  for (const sample of samples) {
+    if (sample.parent.functions.length === 0) continue;
+    const key = [...new Set(sample.parent.functions)].sort().join('-');
+    const list = kinds.get(key) ?? [];
+    list.push(sample);
+    kinds.set(key, list);
+  }
+  const enough = Math.max(100, Math.ceil(samples.length * 0.01));
+  // The most specific kinds first (most tags), then the commonest; a phrase goes to the first kind its label carries.
+  const candidates = [...kinds]
+    .filter(([, list]) => list.length >= enough)
+    .map(([key]) => key.split('-'))
+    .sort((a, b) => b.length - a.length || (kinds.get(b.join('-'))!.length - kinds.get(a.join('-'))!.length));
+  const lists: LearnedList[] = [];
+  let rest = samples;
+  for (const functions of candidates.slice(0, 8)) {
+    const own = rest.filter((sample) => functions.every((tag) => sample.parent.functions.includes(tag)));
+    if (own.length < enough) continue;
+    const list = learnList(own, functions, table, minimumSupport);
+    if (rightBy(list, own, table) - rightBy(general, own, table) < Math.max(10, own.length * 0.02)) continue;
+    lists.push(list);
+    const taken = new Set(own);
+    rest = rest.filter((sample) => !taken.has(sample));
+  }
+  lists.push(lists.length === 0 ? general : learnList(rest, [], table, minimumSupport));
+  const block: LearnedBlock = { category, lists, phrases: samples.length, baseRight: 0, learnedRight: 0 };
   for (const sample of samples) {
     if (chooseFrom(sample.candidates, sample.parent, table).child === sample.gold) block.baseRight++;
-    if (predict(block, sample.candidates, punctuation) === sample.gold) block.learnedRight++;
+    if (predict(listFor(lists, sample.parent)!, sample.candidates, table.punctuation) === sample.gold) block.learnedRight++;
   }
   return block;
 }
@@ -173,6 +314,48 @@ export function suggestBlocks(samples: Map<string, Sample[]>, table: HeadTable, 
     else kept.push(block);
   }
   return { changed, kept };
+}
+
+/**
+ * The steps of a learned list as a table writes them, merged where that
+ * changes nothing: consecutive steps for one feature from one end under
+ * different guards make one step with all the guards (`if VBZ[form=is]
+ * VBD[form=was]`); then consecutive steps from one end under the same guards
+ * make one `each` step; word tests of one category join (`VBZ[form=is,'s]`).
+ */
+export function writtenSteps(steps: readonly LearnedStep[]): string[] {
+  const byFeature: Array<{ category: string; end: string; guards: string[] }> = [];
+  for (const step of steps) {
+    const last = byFeature[byFeature.length - 1];
+    if (last && last.category === step.category && last.end === step.end && last.guards.length > 0 && step.guard !== undefined) last.guards.push(step.guard);
+    else byFeature.push({ category: step.category, end: step.end, guards: step.guard === undefined ? [] : [step.guard] });
+  }
+  const written: string[] = [];
+  let current: { end: string; guards: string; categories: string[] } | undefined;
+  const flush = () => current && written.push(`${current.end} each ${joinWordTests(current.categories).join(' ')}${current.guards ? ` if ${current.guards}` : ''}`);
+  for (const step of byFeature) {
+    const guards = joinWordTests(step.guards).join(' ');
+    if (current && current.end === step.end && current.guards === guards) current.categories.push(step.category);
+    else {
+      flush();
+      current = { end: step.end, guards, categories: [step.category] };
+    }
+  }
+  flush();
+  return written;
+}
+
+/** Joins consecutive word tests of one category: `VBZ[form=is]`, `VBZ[form='s]` → `VBZ[form=is,'s]`. */
+function joinWordTests(patterns: readonly string[]): string[] {
+  const joined: string[] = [];
+  for (const pattern of patterns) {
+    const previous = joined[joined.length - 1];
+    const open = pattern.indexOf('[form=');
+    if (previous && open > 0 && previous.startsWith(pattern.slice(0, open + 6)) && previous.endsWith(']')) {
+      joined[joined.length - 1] = `${previous.slice(0, -1)},${pattern.slice(open + 6)}`;
+    } else joined.push(pattern);
+  }
+  return joined;
 }
 
 /**
@@ -205,18 +388,16 @@ export function writeSuggestedTable(name: string, base: string, sentences: numbe
   for (const block of changed) {
     lines.push(`# ${block.category}: ${block.phrases.toLocaleString('en-US')} phrases; ${base} right in ${share(block.baseRight, block.phrases)}, this block in ${share(block.learnedRight, block.phrases)}.`);
     lines.push(`head ${block.category}`);
-    // Consecutive categories looked for from the same end make one step.
-    let current: { end: string; categories: string[] } | undefined;
-    const flush = () => current && lines.push(`  ${current.end} each ${current.categories.join(' ')}`);
-    for (const step of block.steps) {
-      if (current && current.end === step.end) current.categories.push(step.category);
-      else {
-        flush();
-        current = { end: step.end, categories: [step.category] };
+    for (const list of block.lists) {
+      const kind = list.functions.length === 0 ? '' : ` for ${block.category}-${list.functions.join('-')}`;
+      if (block.lists.length > 1) {
+        const which = list.functions.length === 0 ? 'the other phrases' : `${block.category}-${list.functions.join('-')}`;
+        lines.push(`  # ${which}: ${list.phrases.toLocaleString('en-US')} phrases`);
       }
+      for (const step of writtenSteps(list.steps)) lines.push(`  ${step}${kind}`);
+      lines.push(`  ${list.fallback} first${kind}`);
     }
-    flush();
-    lines.push(`  ${block.fallback} first`, '');
+    lines.push('');
   }
   return lines.join('\n');
 }

@@ -1,0 +1,65 @@
+// The head-table learner on made-up phrases whose gold heads follow rules we know, so that what it
+// learns can be checked: lists for kinds of phrase (function tags of the phrase's own label),
+// guards on function words, and the table text it writes, which must decide as the learner predicted.
+import { describe, expect, it } from 'vitest';
+import { learnBlock, writtenSteps, writeSuggestedTable } from '../../src/evaluate/suggest-heads.js';
+import { chooseFrom } from '../../src/convert/find-heads.js';
+import { compileHeadTable, loadHeadTable } from '../../src/tables/load-table.js';
+import type { Candidate } from '../../src/tables/label-pattern.js';
+
+const child = (label: string, form = 'x'): Candidate => {
+  const [category, ...functions] = label.split('-');
+  return { category: category!, functions, headWord: { pos: category!, form, lemma: undefined } };
+};
+const phrase = (label: string, children: Candidate[], gold: number) => {
+  const [category, ...functions] = label.split('-');
+  return { parent: { category: category!, functions }, candidates: children, gold };
+};
+const generic = loadHeadTable('generic');
+
+describe('learning a head block from gold', () => {
+  it('gives a kind of phrase that is headed differently a list of its own, written with `for`', () => {
+    // Clauses with a subject and a copula: main clauses are headed by the predicate, clauses of
+    // direct speech by the subject (as a scheme's UD version may draw them).
+    const samples = [
+      ...Array.from({ length: 300 }, () => phrase('IP-MAT', [child('NP-SBJ'), child('BE'), child('NP-PRD')], 2)),
+      ...Array.from({ length: 200 }, () => phrase('IP-MAT-SPE', [child('NP-SBJ'), child('BE'), child('NP-PRD')], 0)),
+      ...Array.from({ length: 300 }, () => phrase('IP-SUB', [child('NP-SBJ'), child('VB'), child('NP-OB1')], 1)),
+    ];
+    const block = learnBlock('IP', samples, generic);
+    expect(block.lists.map((list) => list.functions)).toEqual([['MAT', 'SPE'], []]);
+    expect(block.learnedRight).toBe(samples.length);
+    const text = writeSuggestedTable('learned', 'generic', 800, [block], []);
+    expect(text).toContain('  # IP-MAT-SPE: 200 phrases\n  left each NP for IP-MAT-SPE\n  left first for IP-MAT-SPE\n');
+    // The written table decides every phrase as the learner did.
+    const table = compileHeadTable(text);
+    for (const sample of samples) expect(chooseFrom(sample.candidates, sample.parent, table).child).toBe(sample.gold);
+  });
+
+  it('learns a guard on a function word when the word decides the head (a copula before its predicate)', () => {
+    const samples = [
+      ...Array.from({ length: 200 }, () => phrase('VP', [child('VBZ', 'is'), child('ADJP', 'calm')], 1)),
+      ...Array.from({ length: 200 }, () => phrase('VP', [child('VBZ', 'seems'), child('ADJP', 'calm')], 0)),
+      ...Array.from({ length: 200 }, (_, i) => phrase('VP', [child('VBZ', `sails${i % 7}`), child('NP', 'boats')], 0)),
+    ];
+    const block = learnBlock('VP', samples, generic);
+    expect(block.learnedRight).toBe(samples.length);
+    const steps = writtenSteps(block.lists[0]!.steps);
+    expect(steps[0]).toBe('left each ADJP if VBZ[form=is]');
+    const table = compileHeadTable(writeSuggestedTable('learned', 'generic', 600, [block], []));
+    for (const sample of samples) expect(chooseFrom(sample.candidates, sample.parent, table).child).toBe(sample.gold);
+  });
+
+  it('writes steps merged only where that changes nothing', () => {
+    expect(
+      writtenSteps([
+        { category: '*-PRD', end: 'left', guard: 'VBZ[form=is]', hits: 9, misses: 0 },
+        { category: '*-PRD', end: 'left', guard: "VBZ[form='s]", hits: 9, misses: 0 },
+        { category: '*-PRD', end: 'left', guard: 'VBD[form=was]', hits: 9, misses: 0 },
+        { category: 'VP', end: 'left', hits: 9, misses: 0 },
+        { category: 'VB', end: 'left', hits: 9, misses: 0 },
+        { category: 'NN', end: 'right', hits: 9, misses: 0 },
+      ]),
+    ).toEqual(["left each *-PRD if VBZ[form=is,'s] VBD[form=was]", 'left each VP VB', 'right each NN']);
+  });
+});
