@@ -89,16 +89,21 @@ describe('clause heads of penn-historical', () => {
     expect(head('(IP-SUB (NP-SBJ (N-N keeper)) (BEDI was) (ADJP (ADJ-N glad)))')).toBe('glad');
   });
 
-  it('direct speech: an adjective phrase, else the subject or predicate noun that comes first', () => {
+  it('direct speech: an adjective phrase, else the first noun phrase (subject, predicate or object)', () => {
     expect(head('(IP-MAT-SPE (NP-SBJ (PRO-N it)) (BEPI is) (NP-PRD (N-N ferry)))')).toBe('it');
     expect(head('(IP-MAT-SPE (NP-PRD (N-N ferry)) (BEPI is) (NP-SBJ (PRO-N it)))')).toBe('ferry');
     expect(head('(IP-MAT-SPE (NP-SBJ (PRO-N it)) (BEPI is) (ADJP (ADJ-N late)))')).toBe('late');
   });
 
-  it('subordinate direct speech: have, else the subject or be, whichever comes first', () => {
+  it('subordinate direct speech: have, else the first noun phrase or be', () => {
     expect(head('(IP-SUB-SPE (NP-SBJ (PRO-N we)) (HVPI have) (NP-OB1 (N-A rope)))')).toBe('have');
     expect(head('(IP-SUB-SPE (NP-SBJ (N-N ferry)) (BEPI is) (ADJP (ADJ-N late)))')).toBe('ferry');
     expect(head('(IP-SUB-SPE (BEPI is) (NP-SBJ (N-N ferry)) (ADJP (ADJ-N late)))')).toBe('is');
+  });
+
+  it('an infinitive with a subject and be is headed by the subject; without a subject, by its marker', () => {
+    expect(head('(IP-INF (NP-SBJ (PRO-A him)) (BE be) (ADJP (ADJ-A ready)))')).toBe('him');
+    expect(head('(IP-INF (TO to) (BE be) (PP (P in) (NP (N-D harbour))))')).toBe('to');
   });
 
   it('a passive participle heads its clause; after have, the participle of be heads a subordinate clause', () => {
