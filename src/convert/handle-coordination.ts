@@ -51,8 +51,15 @@ export function findCoordination(phrase: PhraseNode, candidates: Candidate[], ta
       else break;
     }
   }
-  if (conjuncts.length < 2) return undefined;
   conjuncts.sort((a, b) => a - b);
+  // A clause coordinates clauses: what stands before "but" in "Uh, but it was" or "In 2010, and
+  // then again …" (an interjection, an adverbial) is not a conjunct but a dependent of the clause.
+  const phraseCategory = phrase.category;
+  const afterFirst = conjuncts.find((i) => i > first);
+  if (afterFirst !== undefined && candidates[afterFirst]!.category === phraseCategory) {
+    while (conjuncts.length > 0 && conjuncts[0]! < first && candidates[conjuncts[0]!]!.category !== phraseCategory) conjuncts.shift();
+  }
+  if (conjuncts.length < 2) return undefined;
   const low = conjuncts[0]!;
   const high = conjuncts[conjuncts.length - 1]!;
   const separators: number[] = [];

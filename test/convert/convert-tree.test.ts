@@ -48,6 +48,13 @@ describe('converting a tree', () => {
     expect(arcs('(S (NP-SBJ (NNS Gulls) (CC and) (NNS terns)) (VP (VBD circled)))', 'en-content', { coordination: style })).toEqual(expected);
   });
 
+  it('does not take an interjection or adverbial before "but" for a conjunct of the clauses it introduces', () => {
+    const text = '(S (INTJ (UH Well)) (, ,) (CC but) (S (NP-SBJ (PRP it)) (VP (VBD sailed))) (, ,) (CC and) (S (NP-SBJ (PRP we)) (VP (VBD waved))))';
+    expect(arcs(text, 'en-content', { labelTable: 'en-ud' })).toEqual([
+      'Well→sailed/discourse', ',→sailed/punct', 'but→sailed/cc', 'it→sailed/nsubj', 'sailed→ROOT/root', ',→waved/punct', 'and→waved/cc', 'we→waved/nsubj', 'waved→sailed/conj',
+    ]);
+  });
+
   it('raises the subject of a verbless clause under a verb to the verb, as en-content asks (raise-subject)', () => {
     const text = '(S (NP-SBJ (PRP They)) (VP (VBD made) (S (NP-SBJ (PRP it)) (ADJP-PRD (JJ difficult)))))';
     expect(arcs(text, 'en-content', { labelTable: 'en-ud' })).toEqual(['They→made/nsubj', 'made→ROOT/root', 'it→made/obj', 'difficult→made/xcomp']);
