@@ -93,6 +93,7 @@ export type { BracketSample, DependencySample, LossKind, RoundTripReport, RoundT
 export type { AttachmentScore } from './evaluate/score-attachments.js';
 export { AttachmentScorer } from './evaluate/score-attachments.js';
 export type { LearnedBlock, LearnedList } from './evaluate/suggest-heads.js';
+export type { LearnedLabelRule, LearnedLabels } from './evaluate/suggest-labels.js';
 export { lossKinds } from './evaluate/roundtrip.js';
 export type { ConversionScore, AttachmentError, ParentTally } from './evaluate/score-conversion.js';
 export type { PairingTally } from './evaluate/pair-with-gold.js';
@@ -113,8 +114,8 @@ export type { StructureAnalysis } from './api/structure.js';
 export { analyseStructure } from './api/structure.js';
 export type { Validation } from './api/validate.js';
 export { validateBracketed, validateConllu } from './api/validate.js';
-export type { HeadScore, RoundTrip, Stream, SuggestedTable } from './api/evaluate.js';
-export { roundTrip, scoreHeads, suggestHeads } from './api/evaluate.js';
+export type { HeadScore, RoundTrip, Stream, SuggestedLabels, SuggestedTable } from './api/evaluate.js';
+export { roundTrip, scoreHeads, suggestHeads, suggestLabels } from './api/evaluate.js';
 export type { HeadExplanation } from './api/explain.js';
 export { explainHeads } from './api/explain.js';
 export { writeReport as writeRoundTripReport } from './report/write-report.js';

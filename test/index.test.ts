@@ -71,6 +71,7 @@ describe('the public interface', () => {
       'scoreHeads',
       'shippedTables',
       'suggestHeads',
+      'suggestLabels',
       'terminalsInOrder',
       'toBrackets',
       'treeHeads',

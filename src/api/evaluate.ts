@@ -5,6 +5,7 @@ import { emptyTally, type PairingTally } from '../evaluate/pair-with-gold.js';
 import { BracketRoundTrip, DependencyRoundTrip, type RoundTripReport, type RoundTripSample } from '../evaluate/roundtrip.js';
 import { scoreConversion, type ConversionScore } from '../evaluate/score-conversion.js';
 import { collectPhrases, suggestBlocks, writeSuggestedTable, type LearnedBlock } from '../evaluate/suggest-heads.js';
+import { collectLabelSamples, learnLabels, writeLearnedLabels, type LearnedLabels } from '../evaluate/suggest-labels.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { insertTraces } from '../traces/insert-traces.js';
@@ -176,4 +177,44 @@ export async function suggestHeads(
   const { changed, kept } = suggestBlocks(collected.samples, settings.heads, { minimumPhrases: learning.minimumPhrases, minimumGain: learning.minimumGain });
   const text = writeSuggestedTable(learning.name, learning.baseReference ?? learning.base, collected.sentences, changed, kept, learning.inlineBase) + '\n';
   return { text, sentences: collected.sentences, changed, kept, pairing };
+}
+
+/** What a label table is learned with: the head table whose attachments it labels, and what to leave out. */
+export const suggestLabelsSchema = z.strictObject({
+  /** The new table's name. */
+  name: z.string().regex(/^[A-Za-z0-9._-]+$/).default('suggested'),
+  /** Fewest attachments a refined rule must decide better than the rule above it. */
+  minimumSupport: z.number().int().min(1).default(5),
+  /** Gold words not to learn from, by a MISC key and its values. */
+  unscored: z.strictObject({ key: z.string().min(1), values: z.array(z.string()).min(1) }).optional(),
+});
+
+/** A learned label table: its text, ready to write, the rules, and how trees and gold were paired. */
+export interface SuggestedLabels {
+  text: string;
+  learned: LearnedLabels;
+  pairing: PairingTally;
+}
+
+/**
+ * Learns a label table from gold dependencies, as `treebridge heads suggest
+ * --labels` does: the trees are converted with the given head table, and
+ * every word whose head is the gold head teaches which relation its
+ * attachment takes (by the dependent's label, the phrase it attaches in, its
+ * side, the head's category, and its part in coordination).
+ */
+export async function suggestLabels(
+  trees: Stream<Tree>,
+  gold: Stream<DependencySentence>,
+  options: z.input<typeof suggestLabelsSchema> & Pick<ConversionOptions, 'heads' | 'traces' | 'coordination'>,
+  report: Report = () => undefined,
+): Promise<SuggestedLabels> {
+  const { heads, traces, coordination, ...rest } = options;
+  const learning = checkOptions(suggestLabelsSchema, rest);
+  const { settings } = resolveConversionOptions({ heads, traces, coordination, punctuation: 'phrase' });
+  const pairing = emptyTally();
+  const skip = learning.unscored ? unscoredTest(learning.unscored.key, learning.unscored.values) : undefined;
+  const { samples, sentences } = await collectLabelSamples(asAsync(trees), asAsync(gold), settings, report, pairing, skip);
+  const learned = learnLabels(samples, sentences, learning.minimumSupport);
+  return { text: writeLearnedLabels(learning.name, learned), learned, pairing };
 }

@@ -1,7 +1,7 @@
 import type { PosMap } from '../tables/load-pos-map.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
-import type { HeadTable, LabelTable } from '../tables/table-model.js';
+import type { HeadTable, LabelContext, LabelTable } from '../tables/table-model.js';
 import { assignLabels, labelContexts } from './assign-labels.js';
 import { classifyWords } from './classify-words.js';
 import { joinWrittenWords } from './join-written-words.js';
@@ -35,6 +35,8 @@ export interface Conversion {
   sentence: DependencySentence;
   root: ConversionNode;
   words: WordNode[];
+  /** What label rules saw of each word's attachment (undefined for the root), for learning label tables. */
+  contexts: Array<LabelContext | undefined>;
 }
 
 /**
@@ -98,5 +100,5 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
     lines,
     id,
   };
-  return { sentence, root, words };
+  return { sentence, root, words, contexts };
 }

@@ -16,7 +16,7 @@ export type Matcher = (candidate: Candidate) => boolean;
 
 /**
  * Compiles a label pattern: `NP` (category NP, any function tags), `NP-PRD`
- * (and function tag PRD), `*-PRD` (any category with PRD), `*-` (any category
+ * (and function tag PRD), `NP-` (NP without function tags), `*-PRD` (any category with PRD), `*-` (any category
  * without function tags), `VB*` (category starting VB), `*` (anything); a head-word test `[pos=…]`, `[form=…]` or
  * `[lemma=…]` narrows it (values may hold `*` for any run of characters; forms and lemmas
  * compare without case).
@@ -37,13 +37,18 @@ export function compileAnyOf(patterns: PatternSyntax[]): Matcher {
   const categories = new Set<string>();
   const others: Matcher[] = [];
   for (const pattern of patterns) {
-    const plain = !pattern.test && !pattern.label.includes('*') ? parseLabel(pattern.label) : undefined;
+    const plain = !pattern.test && !pattern.label.includes('*') && !isTaglessPattern(pattern.label) ? parseLabel(pattern.label) : undefined;
     if (plain && plain.functions.length === 0) categories.add(plain.category);
     else others.push(compilePattern(pattern));
   }
   if (others.length === 0) return (candidate) => categories.has(candidate.category);
   if (categories.size === 0) return others.length === 1 ? others[0]! : (candidate) => others.some((m) => m(candidate));
   return (candidate) => categories.has(candidate.category) || others.some((m) => m(candidate));
+}
+
+/** `NP-`: a category (with no hyphen of its own, unlike `-LRB-`) and a final hyphen. */
+function isTaglessPattern(text: string): boolean {
+  return /^[^-*]+-$/.test(text);
 }
 
 function compileLabel(text: string): Matcher {
@@ -53,6 +58,11 @@ function compileLabel(text: string): Matcher {
   if (text.startsWith('*-')) {
     const tags = text.slice(2).split('-');
     return (candidate) => tags.every((tag) => candidate.functions.includes(tag));
+  }
+  // `NP-`: that category without function tags.
+  if (isTaglessPattern(text)) {
+    const category = text.slice(0, -1);
+    return (candidate) => candidate.category === category && candidate.functions.length === 0;
   }
   if (text.endsWith('*') && text.length > 1) {
     const prefix = text.slice(0, -1);

@@ -2,7 +2,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { loadHeadTable } from '../../src/tables/load-table.js';
+import { loadHeadTable, loadLabelTable } from '../../src/tables/load-table.js';
 import { cli } from '../support/cli.js';
 import { projectRoot } from '../support/corpora.js';
 
@@ -99,5 +99,27 @@ describe('treebridge heads suggest', () => {
     expect(text).not.toMatch(/builds-on .*mine/);
     expect(text).toMatch(/^builds-on generic$/m);
     expect(() => loadHeadTable(table)).not.toThrow();
+  });
+
+  it('with --labels also learns a label table for the new head table, which labels as the gold does', async () => {
+    const table = join(dir, 'with-labels.heads');
+    const labels = join(dir, 'harbour.labels');
+    const suggested = await cli(['heads', 'suggest', trees, '--gold', gold, '--base', 'en-content', '-o', table, '--labels', labels]);
+    expect(suggested.code).toBe(0);
+    expect(suggested.stderr).toMatch(/; \d+ label rules \(\d+\.\d% of the learned attachments labelled as the gold\) written to .*harbour\.labels\n$/);
+    const text = readFileSync(labels, 'utf8');
+    expect(text).toMatch(/^table harbour$/m);
+    expect(text).toMatch(/^label punct role=punctuation$/m);
+    expect(text).toMatch(/^otherwise \S+$/m);
+    loadLabelTable(labels);
+    const scored = JSON.parse((await cli(['heads', 'score', '--json', '--heads', table, '--labels', labels, trees, '--gold', gold])).stdout);
+    const unlabelled = JSON.parse((await cli(['heads', 'score', '--json', '--heads', table, trees, '--gold', gold])).stdout);
+    expect(scored.las).toBeGreaterThan(unlabelled.las + 0.3);
+  });
+
+  it('refuses --labels on standard input, which cannot be read twice', async () => {
+    const result = await cli(['heads', 'suggest', '-', '--gold', gold, '-o', join(dir, 'x.heads'), '--labels', join(dir, 'x.labels')], { stdin: '' });
+    expect(result.code).toBe(2);
+    expect(result.stderr).toMatch(/--labels reads the trees and the gold twice/);
   });
 });

@@ -9,7 +9,8 @@ import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import type { ConversionScore } from '../../evaluate/score-conversion.js';
-import { scoreHeads as scoreHeadsOf, suggestHeads as suggestHeadsOf } from '../../api/evaluate.js';
+import { scoreHeads as scoreHeadsOf, suggestHeads as suggestHeadsOf, suggestLabels as suggestLabelsOf } from '../../api/evaluate.js';
+import { compileHeadTable } from '../../tables/load-table.js';
 import { describePairing, emptyTally, pairingIncomplete, type PairingTally } from '../../evaluate/pair-with-gold.js';
 import { basename, dirname, relative, resolve } from 'node:path';
 import { findTable, headrulesFolder, readTableText } from '../../tables/table-source.js';
@@ -54,6 +55,8 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('--strict', 'exit 1 when any tree or gold sentence is left unpaired or misaligned')
     .requiredOption('-o, --output <file>', 'the new table file')
     .option('--name <name>', 'the new table\'s name (default: from the output file)')
+    .option('--labels <file>', 'also learn a label table (UD relations) for the new head table, and write it to this file; reads the input twice, so files only')
+    .option('--unscored <key=values>', 'gold words not to learn labels from, by a MISC key and its values: Align=absorbed,extra')
     .addOption(new Option('--min-phrases <n>', 'fewest phrases of a category to change its block').default(30).argParser(wholeNumber(1)))
     .addOption(new Option('--min-gain <share>', 'least gain, as a share of the phrases, to change a block').default(0.01).argParser(Number.parseFloat))
     .addOption(new Option('--coordination <style>', 'coordination style (its phrases are left out of learning)').choices(['first', 'last', 'conjunction', 'table']).default('first'))
@@ -216,14 +219,33 @@ function formatScore(result: ConversionScore, table: string, tally: PairingTally
   return lines.join('\n') + '\n';
 }
 
+/** Writes a whole text to a file in one go: the file appears complete or not at all. */
+async function writeWhole(path: string, text: string, io: CliIO): Promise<void> {
+  const output = Output.to(path, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
+  try {
+    await output.write(text);
+    await output.commit();
+  } catch (error) {
+    await output.abandon();
+    throw error;
+  }
+}
+
 async function suggestHeads(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   const base = options.base as string;
-  const settings = conversionSettings({ ...options, heads: base, punctuation: 'phrase' });
+  // Here --labels names the label table to learn and write, not one to convert with.
+  const settings = conversionSettings({ ...options, labels: undefined, heads: base, punctuation: 'phrase' });
   if ('problems' in settings) return { code: ExitCode.UsageOrIO, messages: settings.problems };
   if ((options.gold as string[]).length === 0) return { code: ExitCode.UsageOrIO, messages: ['name the gold dependencies with --gold FILE (repeat it for several files)'] };
+  const labelsPath = options.labels as string | undefined;
+  const unscored = unscoredOption(options.unscored);
+  if (typeof unscored === 'string') return { code: ExitCode.UsageOrIO, messages: [unscored] };
+  if (labelsPath !== undefined && [...files, ...(options.gold as string[])].includes('-')) {
+    return { code: ExitCode.UsageOrIO, messages: ['--labels reads the trees and the gold twice (once for the heads, once for the labels): name files, not standard input'] };
+  }
   const trees = await openInputs(files, io);
   const gold = await openInputs(options.gold as string[], io);
-  const outputs = [options.output as string | undefined, options.report as string | undefined];
+  const outputs = [options.output as string | undefined, labelsPath];
   const wrong = [
     ...checkInputs(trees.inputs, trees.failures, 'heads suggest', ['bracketed', 'xml'], options.from as InputFormat | undefined, outputs, io),
     ...checkInputs(gold.inputs, gold.failures, 'heads suggest --gold', ['conllu'], undefined, outputs, io),
@@ -258,17 +280,31 @@ async function suggestHeads(files: string[], options: Record<string, unknown>, i
   const { changed, kept } = suggested;
   const collected = { sentences: suggested.sentences };
   if (tally.paired === 0) return { code: ExitCode.Findings, messages: [`nothing to learn from: no tree paired with a gold sentence (${describePairing(tally)})`] };
-  const output = Output.to(path, io, (message) => io.stderr.write(`treebridge: ${message}\n`));
-  try {
-    await output.write(suggested.text);
-    await output.commit();
-  } catch (error) {
-    await output.abandon();
-    throw error;
+  await writeWhole(path, suggested.text, io);
+  let labelNote = '';
+  if (labelsPath !== undefined) {
+    // The labels are learned on the attachments the new head table makes.
+    const learnedHeads = compileHeadTable(suggested.text, target);
+    const again = { trees: await openInputs(files, io), gold: await openInputs(options.gold as string[], io) };
+    const quiet = () => undefined;
+    const labels = await suggestLabelsOf(
+      readTreesOf(again.trees.inputs, bracketedReadOptions(options), quiet, io),
+      readSentencesOf(again.gold.inputs, quiet, io),
+      {
+        heads: learnedHeads,
+        name: basename(labelsPath).replace(/\.labels$/, '').replace(/[^A-Za-z0-9._-]/g, '-') || 'suggested',
+        traces: options.traces as 'keep' | 'resolve',
+        coordination: options.coordination as 'first' | 'last' | 'conjunction' | 'table',
+        ...(unscored ? { unscored } : {}),
+      },
+    );
+    await writeWhole(labelsPath, labels.text, io);
+    const { rules, right, attachments } = labels.learned;
+    labelNote = `; ${plural(rules.length, 'label rule')} (${((100 * right) / Math.max(1, attachments)).toFixed(1)}% of the learned attachments labelled as the gold) written to ${labelsPath}`;
   }
   problems.printSummary();
   const left = pairingIncomplete(tally) ? ` (${describePairing(tally)})` : '';
-  io.stderr.write(`treebridge: learned from ${plural(collected.sentences, 'sentence')}${left}: ${plural(changed.length, 'block')} changed, ${kept.length} kept from ${base}; wrote ${path}\n`);
+  io.stderr.write(`treebridge: learned from ${plural(collected.sentences, 'sentence')}${left}: ${plural(changed.length, 'block')} changed, ${kept.length} kept from ${base}; wrote ${path}${labelNote}\n`);
   const strictFailure = options.strict === true && pairingIncomplete(tally);
   return { code: problems.errors > 0 || strictFailure ? ExitCode.Findings : ExitCode.Ok };
 }
