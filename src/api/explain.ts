@@ -1,5 +1,7 @@
 import { headWordOf, type ConversionNode } from '../convert/conversion-tree.js';
 import { findHeads } from '../convert/find-heads.js';
+import { attachDependents } from '../convert/attach-dependents.js';
+import { joinFixedExpressions, joinFixedExpressionsStep } from '../convert/join-fixed-expressions.js';
 import { prepareTree } from '../convert/prepare-tree.js';
 import type { Tree } from '../model/constituency.js';
 import { resolveConversionOptions, type ConversionOptions, type ResolvedConversion } from './options.js';
@@ -17,6 +19,11 @@ export interface HeadExplanation {
   reason: string;
   /** The table line of that step, when a step chose it. */
   line?: number;
+  /**
+   * Restructuring steps that changed what hangs from what in this phrase,
+   * past head choice: `join-fixed-expressions (en-content line 20): "because of": "of" hangs from "because" as fixed`.
+   */
+  restructured?: string[];
 }
 
 /**
@@ -29,6 +36,14 @@ export function explainHeads(tree: Tree, options: ConversionOptions | ResolvedCo
   const prepared = prepareTree(tree, settings.traces);
   if (!prepared) return undefined;
   findHeads(prepared.root, settings.heads, settings.coordination);
+  const attachments = attachDependents(prepared.root, prepared.words, settings.heads, settings.coordination, settings.punctuation);
+  const notes = new Map<ConversionNode, string[]>();
+  for (const joined of joinFixedExpressions(prepared.root, attachments, settings.heads)) {
+    const forms = joined.words.map((index) => prepared.words[index - 1]!.form);
+    const hanging = forms.slice(1).map((form) => `"${form}"`).join(', ');
+    const note = `${joinFixedExpressionsStep} (${settings.heads.name} line ${joined.line}): "${joined.text}": ${hanging} ${forms.length > 2 ? 'hang' : 'hangs'} from "${forms[0]}" as fixed`;
+    notes.set(joined.phrase, [...(notes.get(joined.phrase) ?? []), note]);
+  }
   const explanations: HeadExplanation[] = [];
   const stack: Array<{ node: ConversionNode; depth: number }> = [{ node: prepared.root, depth: 0 }];
   while (stack.length > 0) {
@@ -42,6 +57,7 @@ export function explainHeads(tree: Tree, options: ConversionOptions | ResolvedCo
       headWord: headWordOf(node).form,
       reason: node.head!.reason,
       ...(node.head!.line === undefined ? {} : { line: node.head!.line }),
+      ...(notes.has(node) ? { restructured: notes.get(node) } : {}),
     });
     for (let i = node.children.length - 1; i >= 0; i--) stack.push({ node: node.children[i]!, depth: depth + 1 });
   }

@@ -18,6 +18,8 @@ export function assignLabels(
   return attachments.map((attachment, i) => {
     const context = contexts[i];
     if (!context) return 'root';
+    // A word of a multiword function word (join-fixed-expressions) is `fixed`, whatever the table says.
+    if (attachment.role === 'fixed') return 'fixed';
     if (!table) return untabled(attachment);
     for (const rule of table.rules) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
     return table.otherwise;

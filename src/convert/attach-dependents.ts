@@ -47,7 +47,7 @@ export interface Attachment {
   parent: PhraseNode | null;
   /** The child of `parent` it attaches to. */
   headNode: ConversionNode | null;
-  role: 'conjunct' | 'coordinator' | 'raised' | 'other';
+  role: 'conjunct' | 'coordinator' | 'raised' | 'fixed' | 'other';
 }
 
 /**

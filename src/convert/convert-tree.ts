@@ -8,6 +8,7 @@ import { joinWrittenWords } from './join-written-words.js';
 import { attachDependents, type PunctuationPolicy } from './attach-dependents.js';
 import type { ConversionNode, WordNode } from './conversion-tree.js';
 import { findHeads } from './find-heads.js';
+import { joinFixedExpressions } from './join-fixed-expressions.js';
 import { oracleChooser } from './oracle-heads.js';
 import type { CoordinationStyle } from './handle-coordination.js';
 import { prepareTree, type TraceMode } from './prepare-tree.js';
@@ -42,7 +43,7 @@ export interface Conversion {
 /**
  * Converts a bracketed tree into a dependency sentence, pass by pass:
  * prepare-tree, find-heads (coordination included), attach-dependents
- * (subject raising included), assign-labels, classify-words (UPOS and
+ * (subject raising included), join-fixed-expressions, assign-labels, classify-words (UPOS and
  * features), join-written-words (forms, and the written words that pieces
  * make). `id` becomes `# sent_id`; `origin` names the source tree in each
  * word's MISC. Undefined for a tree without words.
@@ -53,6 +54,7 @@ export function convertTree(tree: Tree, settings: ConversionSettings, id: string
   const { root, words } = prepared;
   findHeads(root, settings.heads, settings.coordination, settings.oracle ? oracleChooser(settings.oracle) : undefined);
   const attachments = attachDependents(root, words, settings.heads, settings.coordination, settings.punctuation);
+  joinFixedExpressions(root, attachments, settings.heads);
   // What label rules see of each attachment, worked out once for the relations and the word classes.
   const contexts = labelContexts(attachments, settings.heads);
   const relations = assignLabels(attachments, settings.labels, settings.heads, contexts);

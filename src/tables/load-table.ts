@@ -59,6 +59,7 @@ const statementShapes = z.discriminatedUnion('keyword', [
   z.object({ keyword: z.literal('coordination-rule'), words: z.tuple([word.extend({ text: z.literal('collins') })]) }),
   z.object({ keyword: z.literal('raise-subject'), words: z.array(word).min(7, 'write raise-subject CATEGORY... under CATEGORY... with PATTERN... without PATTERN...') }),
   z.object({ keyword: z.literal('head'), words: z.array(word).min(1, 'name the parent categories, or * for the default block') }),
+  z.object({ keyword: z.literal('fixed'), words: z.array(word).min(1, 'name the words of the expression, at least two, or write fixed off') }),
   z.object({ keyword: z.enum(['left', 'right']), words: z.array(word).min(1, 'say how: each, any or first') }),
   z.object({ keyword: z.literal('label'), words: z.array(word).min(1, 'name the relation') }),
   z.object({ keyword: z.literal('otherwise'), words: z.tuple([word]) }),
@@ -131,10 +132,11 @@ class TableLoader {
       coordinators: () => false,
       coordinationRule: undefined,
       raising: undefined,
+      fixed: new Map(),
     };
     for (const link of links) {
       this.link = link;
-      table = this.headLink(link, { ...table, name: link.file, blocks: new Map(table.blocks) });
+      table = this.headLink(link, { ...table, name: link.file, blocks: new Map(table.blocks), fixed: new Map(table.fixed) });
     }
     this.finish();
     return table;
@@ -161,6 +163,12 @@ class TableLoader {
           break;
         case 'coordination-rule':
           table.coordinationRule = 'collins';
+          break;
+        case 'fixed':
+          // `fixed off` switches the step off: the expressions of the tables built on are forgotten.
+          if (words.length === 1 && words[0]!.text === 'off') table.fixed = new Map();
+          else if (words.length === 1) this.problem('table-invalid', words[0]!, 'fixed names the words of an expression, at least two (fixed because of), or is fixed off');
+          else table.fixed.set(words.map((w) => w.text.toLowerCase()).join(' '), { file: link.file, line: statement.line });
           break;
         case 'raise-subject': {
           const at = (word: string) => words.findIndex((w) => w.text === word);
@@ -378,7 +386,7 @@ class TableLoader {
       return (context) => context[key] !== undefined && matcher(context[key]!);
     }
     if (key === 'side' || key === 'role') {
-      const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'punctuation', 'raised', 'other'];
+      const allowed = key === 'side' ? ['left', 'right'] : ['conjunct', 'coordinator', 'punctuation', 'raised', 'fixed', 'other'];
       const wrong = values.find((value) => !allowed.includes(value));
       if (wrong) this.problem('table-invalid', w, `${key} is ${allowed.join(' or ')}, not "${wrong}"`);
       return (context) => values.includes(context[key]);

@@ -54,6 +54,13 @@ export interface HeadTable {
    * `raised`), as Universal Dependencies draws `make it difficult`.
    */
   raising: { clause: Matcher; under: Matcher; subject: Matcher; without: Matcher } | undefined;
+  /**
+   * Multiword function words (`fixed because of`): where their words stand
+   * side by side in one phrase, the first heads and the others hang from it
+   * as `fixed` (the restructuring step join-fixed-expressions). Lower-cased
+   * forms, joined by spaces; each with the table line that names it.
+   */
+  fixed: Map<string, { file: string; line: number }>;
 }
 
 /** A condition of a label rule, compiled. */
@@ -80,7 +87,7 @@ export interface LabelContext {
   /** Where the dependent stands from its head. */
   side: 'left' | 'right';
   /** Its part: a further conjunct or a coordinator in a coordination, punctuation (by the head table), or other. */
-  role: 'conjunct' | 'coordinator' | 'punctuation' | 'raised' | 'other';
+  role: 'conjunct' | 'coordinator' | 'punctuation' | 'raised' | 'fixed' | 'other';
 }
 
 export interface LabelRule {

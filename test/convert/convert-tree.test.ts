@@ -118,3 +118,36 @@ describe('clause heads of penn-historical', () => {
     expect(head('(IP-SUB (NP-SBJ (N-N keeper)) (HVDI had) (BEN been) (PP (P in) (NP (N-D harbour))))')).toBe('been');
   });
 });
+
+// Restructuring past head choice: a multiword function word is one word to UD (its `fixed` relation,
+// UD v2 guidelines, from memory): the first word heads, the others hang from it.
+describe('restructuring step join-fixed-expressions', () => {
+  const fog = '(S (NP-SBJ (DT The) (NN ferry)) (VP (VBD stayed) (PP (IN because) (IN of) (NP (DT the) (NN fog)))) (. .))';
+
+  it('makes "because of" one function word: because takes the attachment, of hangs from it as fixed', () => {
+    expect(arcs(fog, 'en-content', { labelTable: 'en-ud' })).toEqual([
+      'The→ferry/det', 'ferry→stayed/nsubj', 'stayed→ROOT/root', 'because→fog/case', 'of→because/fixed', 'the→fog/det', 'fog→stayed/obl', '.→stayed/punct',
+    ]);
+  });
+
+  it('gives the first word the attachment of the word that marks the relation ("such as": as, a case marker)', () => {
+    const text = '(NP (NNS boats) (PP (JJ such) (IN as) (NP (NNS ferries))))';
+    expect(arcs(text, 'en-content', { labelTable: 'en-ud' })).toEqual(['boats→ROOT/root', 'such→ferries/case', 'as→such/fixed', 'ferries→boats/nmod']);
+  });
+
+  it('leaves words alone that are not side by side in one phrase ("a kind of fish" is a noun and its modifier)', () => {
+    const text = '(NP (NP (DT a) (NN kind)) (PP (IN of) (NP (NN fish))))';
+    expect(arcs(text, 'en-content', { labelTable: 'en-ud' })).toEqual(['a→kind/det', 'kind→ROOT/root', 'of→fish/case', 'fish→kind/nmod']);
+  });
+
+  it('is switched off by `fixed off` in a table built on one that has it, and named by heads explain where it acts', async () => {
+    const { compileHeadTable } = await import('../../src/tables/load-table.js');
+    const { explainHeads } = await import('../../src/api/explain.js');
+    const off = compileHeadTable('table plain\nbuilds-on en-content\nfixed off\n');
+    expect(arcs(fog, 'en-content', { heads: off, labelTable: 'en-ud' })[4]).toBe('of→fog/case');
+    const steps = explainHeads(read(`( ${fog} (ID fog.1))`).trees[0]!, { heads: 'en-content' })!;
+    const pp = steps.find((step) => step.label === 'PP')!;
+    expect(pp.restructured).toEqual([expect.stringMatching(/^join-fixed-expressions \(en-content line \d+\): "because of": "of" hangs from "because" as fixed$/)]);
+    expect(explainHeads(read(`( ${fog} (ID fog.1))`).trees[0]!, { heads: off })!.some((step) => step.restructured)).toBe(false);
+  });
+});

@@ -93,7 +93,10 @@ async function explainHeads(file: string, options: Record<string, unknown>, io: 
         continue;
       }
       const lines: string[] = [`${itemName(tree, number)} (${where}), heads by ${settings.heads.name}`];
-      for (const step of explanations) lines.push(`${'  '.repeat(step.depth + 1)}${step.label || '(top)'} → ${step.headLabel} "${step.headWord}": ${step.reason}`);
+      for (const step of explanations) {
+        lines.push(`${'  '.repeat(step.depth + 1)}${step.label || '(top)'} → ${step.headLabel} "${step.headWord}": ${step.reason}`);
+        for (const note of step.restructured ?? []) lines.push(`${'  '.repeat(step.depth + 2)}then ${note}`);
+      }
       await output.write(lines.join('\n') + '\n\n');
       if (wanted !== undefined) break;
     }
