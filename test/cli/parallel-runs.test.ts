@@ -55,4 +55,20 @@ describe('commands on worker threads', () => {
     expect(two.stderr).toBe(one.stderr);
     expect(two.stdout === one.stdout).toBe(true);
   });
+
+  it('measures converted trees as --jobs 1 does: figures, listed arcs, problems and closing line', { timeout: 120_000 }, async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const files = largeInput(folder);
+    const xml = join(projectRoot, 'demo-data', 'ferry-graphs.xml');
+    for (const extra of [['--arcs'], ['--json']]) {
+      const args = ['stats', '--heads', 'en-content', '--traces', 'resolve', '--lemmas', '--verbose', ...extra, files[0]!, xml, files[1]!];
+      const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+      const three = await runBin([...args, '--jobs', '3'], { limitMs: 100_000 });
+      expect(one.code).toBe(1);
+      expect(one.stdout).toMatch(/non-?projective/i);
+      expect(three.code).toBe(one.code);
+      expect(three.stderr).toBe(one.stderr);
+      expect(three.stdout).toBe(one.stdout);
+    }
+  });
 });

@@ -11,6 +11,9 @@ import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import { addBracketedReadOptions, bracketedReadOptions, conversionOptionNames, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionOptionsOf, resolveConversion } from '../conversion-options.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
+import { addJobsOption, jobsOf } from '../jobs-option.js';
+import { convertedText } from '../converted-text.js';
+import { readConllu } from '../../formats/conllu/read-conllu.js';
 
 export function registerStats(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -22,6 +25,7 @@ export function registerStats(program: Command, io: CliIO, done: (result: Comman
     .option('--arcs', 'list each sentence with non-projective arcs, with the gap of each arc')
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
+  addJobsOption(command);
   addListingOptions(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => done(await stats(files, options, io, self)));
 }
@@ -48,10 +52,14 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   let analysis;
   try {
     // Dependency sentences of the inputs: read as CoNLL-U, or converted from constituency trees first.
+    // With several jobs, constituency trees are converted on worker threads, as to-deps does, and their CoNLL-U read back.
+    const jobs = jobsOf(options);
     const sentences =
       conversion === undefined
         ? readSentencesOf(inputs, problems.report, io)
-        : convertTrees(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io), { ...conversionOptionsOf(options), heads: conversion.settings.heads, labels: conversion.settings.labels, posMap: conversion.settings.upos, lossless: false }, problems.report, tally);
+        : jobs > 1
+          ? readConllu(convertedText(inputs, options, conversion, {}, jobs, problems.report, tally, io), { file: 'converted' }, problems.report)
+          : convertTrees(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io), { ...conversionOptionsOf(options), heads: conversion.settings.heads, labels: conversion.settings.labels, posMap: conversion.settings.upos, lossless: false }, problems.report, tally);
     const counted = async function* () {
       for await (const sentence of sentences) {
         read++;

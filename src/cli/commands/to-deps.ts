@@ -1,16 +1,12 @@
 import { Option, type Command } from 'commander';
-import { emptyConversionTally, TreeConverter } from '../../api/convert.js';
-import { writeSentence } from '../../formats/conllu/write-conllu.js';
-import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
-import { conversionOptionsOf, addConversionOptions, resolveConversion } from '../conversion-options.js';
+import { emptyConversionTally } from '../../api/convert.js';
+import { convertedText } from '../converted-text.js';
+import { addBracketedReadOptions, addTreeFormatOption } from '../bracketed-options.js';
+import { addConversionOptions, resolveConversion } from '../conversion-options.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
-import { readTreeBatchesOf, readInputs } from '../read-trees.js';
-import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
-import { readXmlGraphs } from '../../formats/xml-graph/read-xml-graph.js';
-import { formatOf } from '../input-format.js';
 import { addJobsOption, jobsOf } from '../jobs-option.js';
 import { wholeNumber } from '../whole-number.js';
 
@@ -29,12 +25,6 @@ export function registerToDeps(program: Command, io: CliIO, done: (result: Comma
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>) => done(await toDeps(files, options, io)));
 }
 
-/** The conversion options with tables as the user named them, for worker threads to load. */
-function namedConversion(options: Record<string, unknown>) {
-  const { heads, labels, posMap, traces, coordination, punctuation } = conversionOptionsOf(options);
-  return { heads: heads as string, labels: labels as string | undefined, posMap: posMap as string | undefined, traces, coordination, punctuation };
-}
-
 /** Reads the inputs, converts them with the library's convertTrees, writes CoNLL-U, and closes with the counts. */
 async function toDeps(files: string[], options: Record<string, unknown>, io: CliIO): Promise<CommandResult> {
   const resolved = resolveConversion(options);
@@ -47,35 +37,7 @@ async function toDeps(files: string[], options: Record<string, unknown>, io: Cli
   const tally = emptyConversionTally();
   try {
     const naming = { idPrefix: options.idPrefix as string | undefined, firstNumber: options.firstNumber as number };
-    const converter = new TreeConverter({ ...conversionOptionsOf(options), heads: resolved.settings.heads, labels: resolved.settings.labels, posMap: resolved.settings.upos, ...naming }, problems.report, tally);
-    const jobs = jobsOf(options);
-    // Lossless mode carries trees without words across batches: it runs on one thread.
-    if (jobs > 1 && !resolved.lossless) {
-      const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'convert', conversion: namedConversion(options), naming }, problems.report, tally);
-      try {
-        const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string> {
-          if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
-            yield* parallel.run(pieces, name);
-            return;
-          }
-          // An XML input is converted here, after everything before it.
-          yield* parallel.drain();
-          for await (const tree of readXmlGraphs(pieces, { file: name }, problems.report)) yield converter.convertToText(tree);
-        };
-        for await (const text of readInputs(inputs, read, io)) await output.write(text);
-        for await (const text of parallel.drain()) await output.write(text);
-      } finally {
-        await parallel.close();
-      }
-    } else {
-      // A batch at a time: the trees one stretch of input completes are converted and written without waiting between them.
-      for await (const trees of readTreeBatchesOf(inputs, bracketedReadOptions(options), problems.report, io)) {
-        let text = '';
-        for (const tree of trees) text += converter.convertToText(tree);
-        await output.write(text);
-      }
-    }
-    for (const sentence of converter.finish()) await output.write(writeSentence(sentence));
+    for await (const text of convertedText(inputs, options, resolved, naming, jobsOf(options), problems.report, tally, io)) await output.write(text);
     await output.commit();
   } catch (error) {
     await output.abandon();
