@@ -12,7 +12,7 @@ import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
 import { readInputs, readTreeBatchesOf } from '../read-trees.js';
-import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
+import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter } from '../print-problems.js';
 
 export function registerRewrite(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -83,9 +83,9 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
   const { read, written, moved, leftover } = tally;
   const inserted = tally.inserted + sink.tracesInserted;
   const notes = [
-    options.traces === 'resolve' ? `${moved} antecedent${moved === 1 ? '' : 's'} moved to their traces` : '',
-    leftover > 0 ? `${leftover} further trace${leftover === 1 ? '' : 's'} of an antecedent that had moved already left as empty element${leftover === 1 ? '' : 's'}` : '',
-    inserted > 0 ? `${inserted} *ICH* trace${inserted === 1 ? '' : 's'} put in for discontinuous phrases` : '',
+    options.traces === 'resolve' ? `${plural(moved, 'antecedent')} moved to their traces` : '',
+    leftover > 0 ? `${plural(leftover, 'further trace')} of an antecedent that had moved already left as empty element${leftover === 1 ? '' : 's'}` : '',
+    inserted > 0 ? `${plural(inserted, '*ICH* trace')} put in for discontinuous phrases` : '',
   ].filter(Boolean);
   problems.printSummary();
   io.stderr.write(closingLine(read, 'tree', [[written, 'written'], [read - written, 'skipped']], notes, problems));
