@@ -38,12 +38,12 @@ function layoutWords(words: string[]): { boxes: Box[]; width: number } {
   return { boxes, width: Math.max(x - GAP, 1) };
 }
 
-function wordRow(words: string[], tags: string[], boxes: Box[], y: number): string {
+function wordRow(words: string[], tags: string[], boxes: Box[], y: number, empties: ReadonlySet<number> = new Set()): string {
   return words
     .map((word, i) => {
       const { x, width } = boxes[i]!;
       return (
-        `<rect class="word" x="${x}" y="${y}" width="${width}" height="${ROW + 14}" rx="4"/>` +
+        `<rect class="${empties.has(i) ? 'word empty' : 'word'}" x="${x}" y="${y}" width="${width}" height="${ROW + 14}" rx="4"/>` +
         `<text class="form" x="${x + width / 2}" y="${y + 15}">${escapeHtml(word)}</text>` +
         `<text class="tag" x="${x + width / 2}" y="${y + 30}">${escapeHtml(tags[i] ?? '')}</text>`
       );
@@ -57,6 +57,8 @@ interface Bar {
   start: number;
   end: number;
   level: number;
+  /** The legend class it is marked with, if any. */
+  mark?: string | undefined;
 }
 
 /**
@@ -66,33 +68,47 @@ interface Bar {
  * bar is shortened with `…`; the whole label shows on hover and in a line
  * under the drawing.
  */
-export function drawBracketing(tree: Tree, marked: ReadonlyMap<string, string> = new Map()): string {
+export function drawBracketing(tree: Tree, marked: ReadonlyMap<string, string> = new Map(), options: { empties?: boolean } = {}): string {
+  // Slots along the row: the words, and with `empties` the empty elements and traces too (marked
+  // `empty`: no dependency tree holds them). Spans for `marked` count words only.
   const words: string[] = [];
   const tags: string[] = [];
+  const emptySlots = new Set<number>();
   const bars: Bar[] = [];
+  let wordCount = 0;
   // Bottom-up: a phrase's bar spans its children's and stands one level above the highest of them.
-  const spans = new Map<ConstituentNode, { start: number; end: number; level: number }>();
+  const spans = new Map<ConstituentNode, { start: number; end: number; level: number; firstWord: number; lastWord: number }>();
   for (const node of nodesBottomUp(tree.children)) {
-    if (node.type === 'preterminal') {
-      words.push(node.word.form);
-      tags.push(node.pos);
-      spans.set(node, { start: words.length - 1, end: words.length, level: 0 });
+    if (node.type === 'preterminal' || (node.type === 'empty' && options.empties)) {
+      words.push(node.type === 'preterminal' ? node.word.form : node.text);
+      tags.push(node.type === 'preterminal' ? node.pos : formatLabel(node.label));
+      const slot = words.length - 1;
+      if (node.type === 'empty') emptySlots.add(slot);
+      else wordCount++;
+      const word = node.type === 'preterminal' ? wordCount - 1 : -1;
+      spans.set(node, { start: slot, end: slot + 1, level: 0, firstWord: word, lastWord: word });
       continue;
     }
     if (node.type !== 'phrase') continue;
     let start = Infinity;
     let end = -Infinity;
     let level = 0;
+    let firstWord = Infinity;
+    let lastWord = -1;
     for (const child of node.children) {
       const span = spans.get(child);
       if (!span) continue;
       start = Math.min(start, span.start);
       end = Math.max(end, span.end);
       level = Math.max(level, span.level);
+      if (span.firstWord >= 0) firstWord = Math.min(firstWord, span.firstWord);
+      lastWord = Math.max(lastWord, span.lastWord);
     }
     if (start === Infinity) continue;
-    bars.push({ label: formatLabel(node.label), start, end, level: level + 1 });
-    spans.set(node, { start, end, level: level + 1 });
+    // A phrase over empty elements only is lost with them; others are marked by their word span.
+    const key = lastWord < 0 ? undefined : `${firstWord}:${lastWord + 1}`;
+    bars.push({ label: formatLabel(node.label), start, end, level: level + 1, mark: key === undefined ? 'empty' : marked.get(key) });
+    spans.set(node, { start, end, level: level + 1, firstWord: lastWord < 0 ? -1 : firstWord, lastWord });
   }
   const { boxes, width } = layoutWords(words);
   const levels = Math.max(0, ...bars.map((b) => b.level));
@@ -103,8 +119,7 @@ export function drawBracketing(tree: Tree, marked: ReadonlyMap<string, string> =
       const x = boxes[bar.start]!.x;
       const right = boxes[bar.end - 1]!.x + boxes[bar.end - 1]!.width;
       const y = top - bar.level * ROW + 2;
-      const mark = marked.get(`${bar.start}:${bar.end}`);
-      const cls = mark ? `bar ${mark}` : 'bar';
+      const cls = bar.mark ? `bar ${bar.mark}` : 'bar';
       // A label wider than its bar is shortened, never squeezed: letters keep their width.
       const room = Math.floor((right - x - 8) / LABEL_CHAR);
       const shown = bar.label.length <= room ? bar.label : `${bar.label.slice(0, Math.max(1, room - 1))}…`;
@@ -113,7 +128,7 @@ export function drawBracketing(tree: Tree, marked: ReadonlyMap<string, string> =
     })
     .join('');
   const height = top + ROW + 16;
-  const svg = `<svg class="bracketing" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${rects}${wordRow(words, tags, boxes, top)}</svg>`;
+  const svg = `<svg class="bracketing" xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">${rects}${wordRow(words, tags, boxes, top, emptySlots)}</svg>`;
   return shortened.size === 0 ? svg : `${svg}<p class="labels">shortened: ${[...shortened].map(escapeHtml).join(' ')}</p>`;
 }
 

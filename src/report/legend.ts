@@ -13,8 +13,9 @@ export interface Mark {
   line: 'solid' | 'dashed' | 'dotted' | 'thick';
 }
 
-export const marks: Record<'lost' | 'added' | 'relabelled' | 'wrong' | 'crossing' | 'changed' | 'missed', Mark> = {
+export const marks: Record<'lost' | 'empty' | 'added' | 'relabelled' | 'wrong' | 'crossing' | 'changed' | 'missed', Mark> = {
   lost: { name: 'lost', meaning: 'bracket lost', fill: '#f6dcd6', stroke: '#b03a2e', line: 'dashed' },
+  empty: { name: 'empty', meaning: 'empty element or trace, lost (no dependency tree holds it)', fill: '#f3f1ec', stroke: '#b03a2e', line: 'dotted' },
   added: { name: 'added', meaning: 'bracket added', fill: '#d9efe0', stroke: '#2f7d4f', line: 'dotted' },
   relabelled: { name: 'relabelled', meaning: 'same words, another label', fill: '#fdf0c4', stroke: '#9a7410', line: 'solid' },
   wrong: { name: 'wrong', meaning: 'phrase whose head the table chose wrongly', fill: '#e3dcf5', stroke: '#5b3fa8', line: 'thick' },
@@ -40,7 +41,7 @@ rect.word { fill: #ffffff; stroke: #b8b2a3; } rect.bar { fill: #ece6d8; stroke: 
 path.arc { fill: none; stroke: #44546a; stroke-width: 1.2; } path.tip { fill: #44546a; }
 .legend span { display: inline-block; margin-right: 1rem; } .key { display: inline-block; width: 1.6em; height: 0.8em; margin-right: 0.3em; vertical-align: middle; border: 1px solid; }
 ${Object.values(marks)
-  .map((mark) => `rect.bar.${mark.name} { fill: ${mark.fill}; stroke: ${mark.stroke}; ${dash(mark.line)} } path.arc.${mark.name} { stroke: ${mark.stroke}; ${dash(mark.line)} }`)
+  .map((mark) => `rect.bar.${mark.name}, rect.word.${mark.name} { fill: ${mark.fill}; stroke: ${mark.stroke}; ${dash(mark.line)} } path.arc.${mark.name} { stroke: ${mark.stroke}; ${dash(mark.line)} }`)
   .join('\n')}
 `;
 

@@ -42,7 +42,7 @@ export function writeReport(report: RoundTripReport, samples: RoundTripSample[])
     .join('');
   const unit = report.direction === 'brackets' ? 'gold brackets' : 'words';
   const contents = samples.map((sample, index) => `<li>${link(index)} <small>${sample.kinds.join(', ')}</small></li>`).join('');
-  const marks = report.direction === 'brackets' ? (['lost', 'relabelled', 'added', 'crossing'] as const) : (['crossing', 'changed'] as const);
+  const marks = report.direction === 'brackets' ? (['lost', 'empty', 'relabelled', 'added', 'crossing'] as const) : (['crossing', 'changed'] as const);
   return page(
     'treebridge round trip',
     `<h1>Round trip: ${report.direction === 'brackets' ? 'brackets → dependencies → brackets' : 'dependencies → brackets → dependencies'}</h1>` +
@@ -64,7 +64,7 @@ function bracketViews(sample: BracketSample): string {
   const empties = sample.emptyElements.length === 0 ? '' : `<p class="labels">empty elements and traces, which no dependency tree holds: ${sample.emptyElements.map(escapeHtml).join(' · ')}</p>`;
   return (
     `<div class="views">` +
-    figure(drawBracketing(sample.original, original) + empties, 'original') +
+    figure(drawBracketing(sample.original, original, { empties: true }) + empties, 'original') +
     figure(drawSentence(sample.dependencies, 'xpos'), 'dependencies') +
     figure(drawBracketing(sample.rebuilt, new Map([...sample.added].map((span) => [span, 'added']))), 'back') +
     `</div>`

@@ -26,6 +26,20 @@ describe('drawings for the round-trip report', () => {
     expect(count(svg, /<rect class="word"/g)).toBe(3);
   });
 
+  it('draws lost empty elements and traces in place when asked, the phrases over them alone marked empty, word spans unchanged', () => {
+    const tree = read('(S (NP-SBJ (-NONE- *pro*)) (NP (DT The) (NN keeper)) (VP (VBD slept) (NP (-NONE- *T*-1))))').trees[0]!;
+    const plain = drawBracketing(tree, new Map([['0:2', 'lost']]));
+    expect(count(plain, /<rect class="word"/g)).toBe(3);
+    const drawn = drawBracketing(tree, new Map([['0:2', 'lost']]), { empties: true });
+    expect(count(drawn, /<rect class="word"/g)).toBe(3);
+    expect(count(drawn, /<rect class="word empty"/g)).toBe(2);
+    expect(drawn).toContain('>*pro*</text>');
+    expect(drawn).toContain('>*T*-1</text>');
+    // NP-SBJ and the object NP hold nothing but empty elements; "The keeper" keeps its word-span mark.
+    expect(count(drawn, /<rect class="bar empty"/g)).toBe(2);
+    expect(count(drawn, /<rect class="bar lost"/g)).toBe(1);
+  });
+
   it('escapes every corpus string: a word like <script> is shown, never run', () => {
     const tree = read('(S (NP (SYM <script>alert(1)</script>)) (VP (VBD slept)))'.replace('alert(1)', 'alert')).trees[0]!;
     const svg = drawBracketing(tree);
