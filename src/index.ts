@@ -52,7 +52,7 @@ export { readConllu, readConlluFile, readConlluText } from './formats/conllu/rea
 export { unwritableSentenceReason, writeSentence } from './formats/conllu/write-conllu.js';
 
 // Tables: head, label, word (POS map) and category tables, by shipped name, path, or text.
-export type { HeadBlock, HeadStep, HeadTable, LabelCondition, LabelContext, LabelRule, LabelTable } from './tables/table-model.js';
+export type { FixedExpressions, HeadBlock, HeadStep, HeadTable, LabelCondition, LabelContext, LabelRule, LabelTable } from './tables/table-model.js';
 export type { Candidate, Matcher } from './tables/label-pattern.js';
 export { compileHeadTable, compileLabelTable, loadHeadTable, loadLabelTable } from './tables/load-table.js';
 export { formatFeatures, loadPosMap, PosMap, universalTags } from './tables/load-pos-map.js';

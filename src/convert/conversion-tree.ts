@@ -70,6 +70,18 @@ export function headWordOf(node: ConversionNode): WordNode {
   return current;
 }
 
+/** The positions (from 1) of the words under a node, gathered with a stack (no recursion over depth). */
+export function wordIndicesUnder(node: ConversionNode): number[] {
+  const indices: number[] = [];
+  const stack: ConversionNode[] = [node];
+  while (stack.length > 0) {
+    const next = stack.pop()!;
+    if (next.kind === 'word') indices.push(next.index);
+    else stack.push(...next.children);
+  }
+  return indices;
+}
+
 function childrenOf(node: ConversionNode): ConversionNode[] | undefined {
   return node.kind === 'phrase' ? node.children : undefined;
 }

@@ -29,17 +29,19 @@ export interface JoinedExpression {
  * what it joined.
  */
 export function joinFixedExpressions(root: ConversionNode, attachments: Attachment[], table: HeadTable): JoinedExpression[] {
-  if (table.fixed.size === 0) return [];
-  const longest = Math.max(...[...table.fixed.keys()].map((text) => text.split(' ').length));
+  const { byText, firstWords, longest } = table.fixed;
+  if (longest === 0) return [];
   const joined: JoinedExpression[] = [];
   for (const phrase of phrasesTopDown(root)) {
     const children = phrase.children;
     for (let start = 0; start + 1 < children.length; start++) {
+      const first = children[start]!;
+      if (first.kind !== 'word' || !firstWords.has(first.form.toLowerCase())) continue;
       for (let length = Math.min(longest, children.length - start); length >= 2; length--) {
         const run = children.slice(start, start + length);
         if (!run.every((child): child is WordNode => child.kind === 'word')) continue;
         const text = run.map((word) => word.form.toLowerCase()).join(' ');
-        const named = table.fixed.get(text);
+        const named = byText.get(text);
         if (!named) continue;
         join(run, phrase, attachments);
         joined.push({ phrase, words: run.map((word) => word.index), text, ...named });

@@ -1,4 +1,4 @@
-import type { ConversionNode, PhraseNode } from './conversion-tree.js';
+import { wordIndicesUnder, type ConversionNode, type PhraseNode } from './conversion-tree.js';
 
 /**
  * Head choice by a gold tree, for measuring the ceiling of head percolation:
@@ -15,14 +15,7 @@ export function oracleChooser(goldHeads: readonly number[]): (phrase: PhraseNode
     const known = wordsOf.get(node);
     if (known) return known;
     // A phrase asked before its children (not the find-heads order) gathers them with a stack.
-    const found: number[] = [];
-    const stack: ConversionNode[] = [node];
-    while (stack.length > 0) {
-      const next = stack.pop()!;
-      if (next.kind === 'word') found.push(next.index);
-      else stack.push(...next.children);
-    }
-    return found;
+    return wordIndicesUnder(node);
   };
   return (phrase) => {
     const byChild = phrase.children.map(words);

@@ -168,7 +168,7 @@ function wrongChoices(root: ConversionNode, oracleRoot: ConversionNode): WrongCh
   ours.forEach((phrase, k) => {
     const other = theirs[k];
     if (!other || !phrase.head || !other.head || phrase.head.child === other.head.child) return;
-    const indices = wordIndices(phrase);
+    const indices = wordIndicesUnder(phrase);
     const describe = (node: ConversionNode) => `${node.kind === 'phrase' ? node.label : node.pos} "${headWordOf(node).form}"`;
     choices.push({
       label: phrase.label,
@@ -182,20 +182,8 @@ function wrongChoices(root: ConversionNode, oracleRoot: ConversionNode): WrongCh
   return choices;
 }
 
-/** The word positions a phrase covers. */
-function wordIndices(phrase: PhraseNode): number[] {
-  const indices: number[] = [];
-  const stack: ConversionNode[] = [phrase];
-  while (stack.length > 0) {
-    const node = stack.pop()!;
-    if (node.kind === 'word') indices.push(node.index);
-    else stack.push(...node.children);
-  }
-  return indices;
-}
-
 import type { ConversionNode, PhraseNode } from '../convert/conversion-tree.js';
-import { headWordOf, phrasesTopDown } from '../convert/conversion-tree.js';
+import { headWordOf, phrasesTopDown, wordIndicesUnder } from '../convert/conversion-tree.js';
 
 /** For every word, the phrase in which it attaches: the lowest phrase of which it is not the head word. */
 function parentsByWord(root: ConversionNode, count: number): Array<PhraseNode | undefined> {

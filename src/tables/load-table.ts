@@ -4,7 +4,7 @@ import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import { z } from 'zod';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
 import { compileAnyOf, compilePattern, valueTest, type Matcher } from './label-pattern.js';
-import type { HeadBlock, HeadStep, HeadTable, LabelCondition, LabelRule, LabelTable } from './table-model.js';
+import type { FixedExpressions, HeadBlock, HeadStep, HeadTable, LabelCondition, LabelRule, LabelTable } from './table-model.js';
 import type { PatternSyntax, StatementSyntax, WordSyntax } from './table-syntax.js';
 import { findTable, readTableText, requireTable, TableError, type TableKind } from './table-source.js';
 
@@ -66,6 +66,14 @@ const statementShapes = z.discriminatedUnion('keyword', [
 ]);
 const relation = /^[a-z]+(:[a-z]+)?$/;
 const conditionKeys = ['dependent', 'head', 'parent', 'child', 'previous', 'next', 'pos', 'form', 'lemma', 'side', 'role'] as const;
+
+function noFixedExpressions(): FixedExpressions {
+  return { byText: new Map(), firstWords: new Set(), longest: 0 };
+}
+
+function copyFixedExpressions(fixed: FixedExpressions): FixedExpressions {
+  return { byText: new Map(fixed.byText), firstWords: new Set(fixed.firstWords), longest: fixed.longest };
+}
 
 /** One table file of a chain: its statements, and where problems in it are placed. */
 interface Link {
@@ -132,11 +140,11 @@ class TableLoader {
       coordinators: () => false,
       coordinationRule: undefined,
       raising: undefined,
-      fixed: new Map(),
+      fixed: noFixedExpressions(),
     };
     for (const link of links) {
       this.link = link;
-      table = this.headLink(link, { ...table, name: link.file, blocks: new Map(table.blocks), fixed: new Map(table.fixed) });
+      table = this.headLink(link, { ...table, name: link.file, blocks: new Map(table.blocks), fixed: copyFixedExpressions(table.fixed) });
     }
     this.finish();
     return table;
@@ -166,9 +174,14 @@ class TableLoader {
           break;
         case 'fixed':
           // `fixed off` switches the step off: the expressions of the tables built on are forgotten.
-          if (words.length === 1 && words[0]!.text === 'off') table.fixed = new Map();
+          if (words.length === 1 && words[0]!.text === 'off') table.fixed = noFixedExpressions();
           else if (words.length === 1) this.problem('table-invalid', words[0]!, 'fixed names the words of an expression, at least two (fixed because of), or is fixed off');
-          else table.fixed.set(words.map((w) => w.text.toLowerCase()).join(' '), { file: link.file, line: statement.line });
+          else {
+            const forms = words.map((w) => w.text.toLowerCase());
+            table.fixed.byText.set(forms.join(' '), { file: link.file, line: statement.line });
+            table.fixed.firstWords.add(forms[0]!);
+            table.fixed.longest = Math.max(table.fixed.longest, forms.length);
+          }
           break;
         case 'raise-subject': {
           const at = (word: string) => words.findIndex((w) => w.text === word);

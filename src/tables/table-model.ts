@@ -57,10 +57,19 @@ export interface HeadTable {
   /**
    * Multiword function words (`fixed because of`): where their words stand
    * side by side in one phrase, the first heads and the others hang from it
-   * as `fixed` (the restructuring step join-fixed-expressions). Lower-cased
-   * forms, joined by spaces; each with the table line that names it.
+   * as `fixed` (the restructuring step join-fixed-expressions).
    */
-  fixed: Map<string, { file: string; line: number }>;
+  fixed: FixedExpressions;
+}
+
+/** The multiword function words of a head table, ready for lookup while converting. */
+export interface FixedExpressions {
+  /** Lower-cased forms joined by spaces, each with the table line that names it. */
+  byText: Map<string, { file: string; line: number }>;
+  /** The lower-cased first words, so that most words are passed over with one lookup. */
+  firstWords: Set<string>;
+  /** The most words an expression has. */
+  longest: number;
 }
 
 /** A condition of a label rule, compiled. */
