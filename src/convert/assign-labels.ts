@@ -1,4 +1,6 @@
-import type { HeadTable, LabelContext, LabelTable } from '../tables/table-model.js';
+import type { HeadTable, LabelContext, LabelRule, LabelTable } from '../tables/table-model.js';
+import type { Candidate } from '../tables/label-pattern.js';
+import type { WordNode } from './conversion-tree.js';
 import type { Attachment } from './attach-dependents.js';
 import { candidateOf } from './find-heads.js';
 
@@ -21,30 +23,82 @@ export function assignLabels(
     // A word of a multiword function word (join-fixed-expressions) is `fixed`, whatever the table says.
     if (attachment.role === 'fixed') return 'fixed';
     if (!table) return untabled(attachment);
-    for (const rule of table.rules) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
+    for (const rule of rulesFor(table, context.dependent.category)) if (rule.conditions.every((condition) => condition.test(context))) return rule.relation;
     return table.otherwise;
   });
 }
 
+/** Per rule list and category of dependent, the rules that could hold, in order: most rules ask for a few categories only. */
+const rulesByCategory = new WeakMap<readonly LabelRule[], Map<string, LabelRule[]>>();
+
+function rulesFor(table: LabelTable, category: string): LabelRule[] {
+  let byCategory = rulesByCategory.get(table.rules);
+  if (!byCategory) rulesByCategory.set(table.rules, (byCategory = new Map()));
+  let rules = byCategory.get(category);
+  if (!rules) {
+    rules = table.rules.filter((rule) => rule.conditions.every((condition) => !condition.dependentCategory || condition.dependentCategory(category)));
+    if (byCategory.size > 10_000) byCategory.clear();
+    byCategory.set(category, rules);
+  }
+  return rules;
+}
+
 /** What label rules (and word-class rules) see of each attachment; undefined for the root. */
 export function labelContexts(attachments: Attachment[], heads: HeadTable): Array<LabelContext | undefined> {
-  return attachments.map((attachment) => {
-    if (!attachment.governor || !attachment.parent || !attachment.headNode) return undefined;
+  return attachments.map((attachment) => (attachment.governor && attachment.parent && attachment.headNode ? new AttachmentContext(attachment, heads) : undefined));
+}
+
+/**
+ * The context of one attachment. Rules ask about a few of its parts, mostly the
+ * dependent: the others (children, neighbours) are worked out when first asked for.
+ */
+class AttachmentContext implements LabelContext {
+  readonly dependent: Candidate;
+  readonly word: WordNode;
+  readonly side: 'left' | 'right';
+  readonly role: LabelContext['role'];
+  private cached: { head?: Candidate; parent?: Candidate; children?: Candidate[]; previous?: Candidate | undefined; next?: Candidate | undefined } = {};
+
+  constructor(
+    private readonly attachment: Attachment,
+    heads: HeadTable,
+  ) {
     const word = attachment.dependent;
-    const siblings = attachment.parent.children;
-    const at = siblings.indexOf(attachment.node);
-    return {
-      dependent: candidateOf(attachment.node),
-      head: candidateOf(attachment.headNode),
-      parent: candidateOf(attachment.parent),
-      children: attachment.node.kind === 'phrase' ? attachment.node.children.map(candidateOf) : [],
-      previous: at > 0 ? candidateOf(siblings[at - 1]!) : undefined,
-      next: at >= 0 && at + 1 < siblings.length ? candidateOf(siblings[at + 1]!) : undefined,
-      word: { pos: word.pos, form: word.form, lemma: word.lemma },
-      side: word.index < attachment.governor.index ? 'left' : 'right',
-      role: attachment.role === 'other' && heads.punctuation(candidateOf(word)) ? 'punctuation' : attachment.role,
-    };
-  });
+    this.dependent = candidateOf(attachment.node);
+    this.word = word;
+    this.side = word.index < attachment.governor!.index ? 'left' : 'right';
+    this.role = attachment.role === 'other' && heads.punctuation(candidateOf(word)) ? 'punctuation' : attachment.role;
+  }
+
+  get head(): Candidate {
+    return (this.cached.head ??= candidateOf(this.attachment.headNode!));
+  }
+
+  get parent(): Candidate {
+    return (this.cached.parent ??= candidateOf(this.attachment.parent!));
+  }
+
+  get children(): Candidate[] {
+    const node = this.attachment.node;
+    return (this.cached.children ??= node.kind === 'phrase' ? node.children.map(candidateOf) : []);
+  }
+
+  get previous(): Candidate | undefined {
+    if (!('previous' in this.cached)) {
+      const at = this.attachment.parent!.children.indexOf(this.attachment.node);
+      this.cached.previous = at > 0 ? candidateOf(this.attachment.parent!.children[at - 1]!) : undefined;
+    }
+    return this.cached.previous;
+  }
+
+  get next(): Candidate | undefined {
+    if (!('next' in this.cached)) {
+      const siblings = this.attachment.parent!.children;
+      const at = siblings.indexOf(this.attachment.node);
+      this.cached.next = at >= 0 && at + 1 < siblings.length ? candidateOf(siblings[at + 1]!) : undefined;
+    }
+    return this.cached.next;
+  }
 }
 
 function untabled(attachment: Attachment): string {

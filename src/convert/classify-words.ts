@@ -1,12 +1,9 @@
 import type { LabelContext } from '../tables/table-model.js';
-import { formatFeatures, type PosMap } from '../tables/load-pos-map.js';
+import type { PosMap, WrittenClass } from '../tables/load-pos-map.js';
 import type { WordNode } from './conversion-tree.js';
 
 /** A word's UPOS and FEATS as CoNLL-U writes them. */
-export interface WordColumns {
-  upos: string;
-  feats: string;
-}
+export type WordColumns = WrittenClass;
 
 /**
  * The UPOS and features of every word, from the word table: its tag line and
@@ -18,7 +15,7 @@ export function classifyWords(words: WordNode[], relations: string[], contexts: 
   if (!map) return words.map(() => ({ upos: '_', feats: '_' }));
   return words.map((word, i) => {
     const context = contexts[i];
-    const { upos, feats } = map.classify({
+    return map.classifyWritten({
       pos: word.pos,
       form: word.form,
       lemma: word.lemma,
@@ -27,6 +24,5 @@ export function classifyWords(words: WordNode[], relations: string[], contexts: 
       head: context?.head,
       parent: context?.parent,
     });
-    return { upos, feats: formatFeatures(feats) };
   });
 }

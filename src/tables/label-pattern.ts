@@ -46,6 +46,20 @@ export function compileAnyOf(patterns: PatternSyntax[]): Matcher {
   return (candidate) => categories.has(candidate.category) || others.some((m) => m(candidate));
 }
 
+/**
+ * Whether a pattern could match some candidate of a category, whatever its
+ * function tags and head word: `VB*` could for VBD, `*-PRD` for any, `NP-PRD`
+ * only for NP. Lets a table set aside the rules that cannot hold for a category.
+ */
+export function categoryCouldMatch(pattern: PatternSyntax): (category: string) => boolean {
+  const text = pattern.label;
+  if (text === '*' || text.startsWith('*-')) return () => true;
+  if (isTaglessPattern(text)) return (category) => category === text.slice(0, -1);
+  if (text.endsWith('*') && text.length > 1) return (category) => category.startsWith(text.slice(0, -1));
+  const wanted = parseLabel(text).category;
+  return (category) => category === wanted;
+}
+
 /** `NP-`: a category (with no hyphen of its own, unlike `-LRB-`) and a final hyphen. */
 function isTaglessPattern(text: string): boolean {
   return /^[^-*]+-$/.test(text);

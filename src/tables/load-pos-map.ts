@@ -49,6 +49,14 @@ interface TagEntry {
   upos: string;
   feats: Array<[string, string]>;
   rules: Array<{ rule: ContextRule; conditions: Array<(context: WordContext) => boolean> }>;
+  /** The written UPOS and FEATS when no rule holds (index 0) or when rule k - 1 does: each worked out once. */
+  written: Array<WrittenClass | undefined>;
+}
+
+/** A word's UPOS and FEATS as CoNLL-U writes them. */
+export interface WrittenClass {
+  upos: string;
+  feats: string;
 }
 
 type TagTest = ((context: WordContext) => boolean) & { tagTest: (tag: string) => boolean };
@@ -137,6 +145,23 @@ export class PosMap {
     return { upos, feats };
   }
 
+  /** UPOS and FEATS of a word as CoNLL-U writes them: {@link classify}, with the features sorted and joined. */
+  classifyWritten(context: WordContext): WrittenClass {
+    const entry = this.entryFor(context.pos);
+    let chosen = 0;
+    for (let k = 0; k < entry.rules.length; k++) {
+      if (!entry.rules[k]!.conditions.every((condition) => condition(context))) continue;
+      chosen = k + 1;
+      break;
+    }
+    let written = entry.written[chosen];
+    if (!written) {
+      const { upos, feats } = this.classify(context);
+      written = entry.written[chosen] = { upos, feats: formatFeatures(feats) };
+    }
+    return written;
+  }
+
   /** What a tag alone decides, worked out once per tag: a corpus has a few hundred tags and millions of words. */
   private entryFor(tag: string): TagEntry {
     let entry = this.entries.get(tag);
@@ -150,7 +175,7 @@ export class PosMap {
       if (!tagTests.every((condition) => condition.tagTest(tag))) continue;
       rules.push({ rule, conditions: rule.conditions.filter((condition) => !isTagTest(condition)) });
     }
-    entry = { upos: line?.upos ?? '_', feats: [...feats], rules };
+    entry = { upos: line?.upos ?? '_', feats: [...feats], rules, written: [] };
     if (this.entries.size > 50_000) this.entries.clear();
     this.entries.set(tag, entry);
     return entry;

@@ -3,7 +3,7 @@ import type { DiagnosticCode } from '../diagnostics/codes.js';
 import { diagnoseLine, lineOffsets } from '../diagnostics/diagnostic.js';
 import { z } from 'zod';
 import { parse, SyntaxError as GrammarError } from '../generated/tables-parser.js';
-import { compileAnyOf, compilePattern, valueTest, type Matcher } from './label-pattern.js';
+import { categoryCouldMatch, compileAnyOf, compilePattern, valueTest, type Matcher } from './label-pattern.js';
 import type { FixedExpressions, HeadBlock, HeadStep, HeadTable, LabelCondition, LabelRule, LabelTable } from './table-model.js';
 import type { PatternSyntax, StatementSyntax, WordSyntax } from './table-syntax.js';
 import { findTable, readTableText, requireTable, TableError, type TableKind } from './table-source.js';
@@ -380,7 +380,11 @@ class TableLoader {
         this.problem('table-invalid', w, `"${syntax.key}" is not a condition: ${conditionKeys.join(', ')}`);
         return undefined;
       }
-      conditions.push({ key, test: this.condition(key, syntax.values, w) });
+      const test = this.condition(key, syntax.values, w);
+      if (key !== 'dependent') conditions.push({ key, test });
+      else {
+        conditions.push({ key, test, dependentCategory: categoryFilter(syntax.values) });
+      }
     }
     return { relation: relationWord!.text, conditions, file: this.link.file, line: statement.line };
   }
@@ -436,4 +440,16 @@ class TableLoader {
     this.dropped = 0;
     throw new TableError(problems);
   }
+}
+
+/** Whether any of a condition's patterns could hold for a category; a pattern that does not parse (reported already) rules nothing out. */
+function categoryFilter(values: string[]): (category: string) => boolean {
+  const tests = values.map((text) => {
+    try {
+      return categoryCouldMatch(parse(text, { startRule: 'Pattern' }) as PatternSyntax);
+    } catch {
+      return () => true;
+    }
+  });
+  return (category) => tests.some((could) => could(category));
 }

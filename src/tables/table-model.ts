@@ -76,6 +76,8 @@ export interface FixedExpressions {
 export interface LabelCondition {
   key: 'dependent' | 'head' | 'parent' | 'child' | 'previous' | 'next' | 'pos' | 'form' | 'lemma' | 'side' | 'role';
   test: (context: LabelContext) => boolean;
+  /** For a `dependent=` condition: whether it could hold for a dependent of a category (whatever else the dependent is). */
+  dependentCategory?: (category: string) => boolean;
 }
 
 /** What a label rule looks at: an attachment of a dependent to its head. */
