@@ -2,6 +2,8 @@ import { headWordOf, type ConversionNode } from '../convert/conversion-tree.js';
 import { findHeads } from '../convert/find-heads.js';
 import { attachDependents } from '../convert/attach-dependents.js';
 import { joinFixedExpressions, joinFixedExpressionsStep } from '../convert/join-fixed-expressions.js';
+import { attachLateConjunctsStep } from '../convert/attach-late-conjuncts.js';
+import { phrasesTopDown } from '../convert/conversion-tree.js';
 import { prepareTree } from '../convert/prepare-tree.js';
 import type { Tree } from '../model/constituency.js';
 import { resolveConversionOptions, type ConversionOptions, type ResolvedConversion } from './options.js';
@@ -21,7 +23,8 @@ export interface HeadExplanation {
   line?: number;
   /**
    * Restructuring steps that changed what hangs from what in this phrase,
-   * past head choice: `join-fixed-expressions (en-content line 20): "because of": "of" hangs from "because" as fixed`.
+   * past head choice: `join-fixed-expressions (en-content line 20): "because of": "of" hangs from "because" as fixed`,
+   * `attach-late-conjuncts (en-content line 12): "went" is a conjunct of "rained"; "but" hangs from the conjunct after it`.
    */
   restructured?: string[];
 }
@@ -38,6 +41,15 @@ export function explainHeads(tree: Tree, options: ConversionOptions | ResolvedCo
   findHeads(prepared.root, settings.heads, settings.coordination);
   const attachments = attachDependents(prepared.root, prepared.words, settings.heads, settings.coordination, settings.punctuation);
   const notes = new Map<ConversionNode, string[]>();
+  for (const phrase of phrasesTopDown(prepared.root)) {
+    const late = phrase.coordination?.late;
+    if (!late) continue;
+    const form = (i: number) => `"${headWordOf(phrase.children[i]!).form}"`;
+    const [head, ...others] = phrase.coordination!.conjuncts;
+    const hanging = phrase.coordination!.coordinators.map(form);
+    const note = `${attachLateConjunctsStep} (${settings.heads.name} line ${late.line}): ${others.map(form).join(', ')} ${others.length > 1 ? 'are conjuncts' : 'is a conjunct'} of ${form(head!)}; ${hanging.join(', ')} ${hanging.length > 1 ? 'hang' : 'hangs'} from the conjunct after ${hanging.length > 1 ? 'each' : 'it'}`;
+    notes.set(phrase, [note]);
+  }
   for (const joined of joinFixedExpressions(prepared.root, attachments, settings.heads)) {
     const forms = joined.words.map((index) => prepared.words[index - 1]!.form);
     const hanging = forms.slice(1).map((form) => `"${form}"`).join(', ');

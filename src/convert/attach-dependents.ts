@@ -32,8 +32,22 @@ function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: No
 export function raisedSubject(phrase: PhraseNode, clause: PhraseNode, rule: NonNullable<HeadTable['raising']>): number {
   if (!rule.under(candidateOf(phrase)) || !rule.clause(candidateOf(clause))) return -1;
   const candidates = clause.children.map(candidateOf);
-  if (candidates.some((c) => rule.without(c))) return -1;
+  if (spineHas(clause, rule.without)) return -1;
   return candidates.findIndex((c) => rule.subject(c));
+}
+
+/**
+ * Whether a child of the clause, or of a phrase on its line of heads, matches:
+ * the finite verb of `[the letter] is perhaps the best piece` stands one level
+ * down, beside the predicate that heads the verb phrase.
+ */
+function spineHas(clause: PhraseNode, matcher: (candidate: ReturnType<typeof candidateOf>) => boolean): boolean {
+  let node: ConversionNode = clause;
+  while (node.kind === 'phrase') {
+    if (node.children.some((child) => matcher(candidateOf(child)))) return true;
+    node = node.children[node.head?.child ?? 0]!;
+  }
+  return false;
 }
 
 /** A word's attachment to its head word, with what the label table looks at. */

@@ -29,6 +29,8 @@ export interface Coordination {
   coordinators: number[];
   /** Punctuation children between the first and the last conjunct. */
   separators: number[];
+  /** Set when the step attach-late-conjuncts drew it, with the table line that switched it on. */
+  late?: { file: string; line: number };
 }
 
 /** A phrase over at least one word. */

@@ -2,6 +2,7 @@ import type { Candidate } from '../tables/label-pattern.js';
 import type { HeadBlock, HeadStep, HeadTable } from '../tables/table-model.js';
 import { headWordOf, phrasesBottomUp, type ConversionNode, type HeadChoice, type PhraseNode } from './conversion-tree.js';
 import { coordinationHead, findCoordination, type CoordinationStyle } from './handle-coordination.js';
+import { findLateConjuncts } from './attach-late-conjuncts.js';
 
 /** A node as head-table patterns see it: its label and its head word (heads below it already found). */
 export function candidateOf(node: ConversionNode): Candidate {
@@ -41,12 +42,17 @@ function decideHead(
     // The oracle knows the head; coordination still attaches coordinators and separators by the style.
     const coordination = style === 'table' ? undefined : findCoordination(phrase, candidates, table);
     if (coordination && style !== 'table' && coordinationHead(coordination, style) === chosen) phrase.coordination = coordination;
+    else if (!coordination && style === 'first') phrase.coordination = findLateConjuncts(phrase, candidates, chosen, table);
     return { child: chosen, reason: 'oracle: the child holding the gold head' };
   }
   const choice = chooseFrom(candidates, phrase, table);
   if (style === 'table') return choice;
   const coordination = findCoordination(phrase, candidates, table);
-  if (!coordination) return choice;
+  if (!coordination) {
+    // The first conjunct may be the head child with what hangs from it: `It rained, but we went out`.
+    if (style === 'first') phrase.coordination = findLateConjuncts(phrase, candidates, choice.child, table);
+    return choice;
+  }
   phrase.coordination = coordination;
   // A head outside the conjuncts means the coordination is among its dependents: the head stays.
   const low = coordination.conjuncts[0]!;

@@ -41,9 +41,17 @@ export function findCoordination(phrase: PhraseNode, candidates: Candidate[], ta
   // Further back, conjuncts separated by punctuation only.
   for (let i = before - 1; i >= 1 && isPunctuation(i) && content(i - 1); i -= 2) conjuncts.unshift(i - 1);
   // After each coordinator: the next content child, and punctuation-separated ones up to the next coordinator.
+  // An adverbial may stand between ("but rather the legitimacy"): a child of the first conjunct's
+  // category, or of the phrase's own, before the next coordinator is the conjunct then.
+  const kinds = [candidates[before]!.category, phrase.category];
   for (const c of coordinators) {
     let after = c + 1;
     while (after < n && isPunctuation(after)) after++;
+    if (content(after) && !kinds.includes(candidates[after]!.category)) {
+      let alike = after + 1;
+      while (alike < n && !isCoordinator(alike) && !kinds.includes(candidates[alike]!.category)) alike++;
+      if (alike < n && !isCoordinator(alike)) after = alike;
+    }
     if (!content(after) || conjuncts.includes(after)) continue;
     conjuncts.push(after);
     for (let i = after + 1; i + 1 < n && isPunctuation(i) && content(i + 1) && !isCoordinator(i + 1); i += 2) {
@@ -91,13 +99,12 @@ export function coordinationAttachments(
   const inside = (i: number) => i >= coordination.conjuncts[0]! && i <= coordination.conjuncts[coordination.conjuncts.length - 1]!;
   const head = groupHead;
   const { conjuncts, coordinators, separators } = coordination;
-  // A coordinator or separator hangs from the conjunct right after it; when other words come between, from the head (no crossing).
-  const attachable = (i: number) => !separators.includes(i) && !coordinators.includes(i);
-  const nextConjunct = (i: number) => {
-    let next = i + 1;
-    while (next < childCount && !attachable(next)) next++;
-    return conjuncts.includes(next) ? next : head;
-  };
+  // A coordinator or separator hangs from the conjunct after it, as do the words between a coordinator
+  // and that conjunct ("but rather the legitimacy …"); without a conjunct after it, from the head.
+  const nextConjunct = (i: number) => conjuncts.find((k) => k > i) ?? head;
+  /** Children between a coordinator and the conjunct after it. */
+  const leading = new Set<number>();
+  for (const c of coordinators) for (let i = c + 1; i < nextConjunct(c); i++) leading.add(i);
   return Array.from({ length: childCount }, (_, i) => {
     const role = conjuncts.includes(i) ? 'conjunct' : coordinators.includes(i) ? 'coordinator' : 'other';
     if (phraseHead !== groupHead) {
@@ -105,7 +112,7 @@ export function coordinationAttachments(
       if (i === groupHead || !inside(i)) return { to: phraseHead, role: i === groupHead ? ('other' as const) : role };
     }
     if (i === head) return { to: i, role };
-    if (style === 'first' && (coordinators.includes(i) || separators.includes(i))) return { to: nextConjunct(i), role };
+    if (style === 'first' && (coordinators.includes(i) || separators.includes(i) || leading.has(i))) return { to: nextConjunct(i), role };
     return { to: head, role };
   });
 }

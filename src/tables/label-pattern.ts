@@ -18,8 +18,8 @@ export type Matcher = (candidate: Candidate) => boolean;
  * Compiles a label pattern: `NP` (category NP, any function tags), `NP-PRD`
  * (and function tag PRD), `NP-` (NP without function tags), `*-PRD` (any category with PRD), `*-` (any category
  * without function tags), `VB*` (category starting VB), `*` (anything); a head-word test `[pos=…]`, `[form=…]` or
- * `[lemma=…]` narrows it (values may hold `*` for any run of characters; forms and lemmas
- * compare without case).
+ * `[lemma=…]` narrows it, `[form!=…]` narrows it to the other words (values may hold `*` for any run
+ * of characters; forms and lemmas compare without case).
  */
 export function compilePattern(pattern: PatternSyntax): Matcher {
   const label = compileLabel(pattern.label);
@@ -88,7 +88,8 @@ function compileLabel(text: string): Matcher {
 }
 
 function compileHeadWordTest(test: HeadWordTestSyntax): Matcher {
-  const matches = valueTest(test.values, test.key !== 'pos');
+  const listed = valueTest(test.values, test.key !== 'pos');
+  const matches = test.negated ? (value: string) => !listed(value) : listed;
   return (candidate) => {
     const word = candidate.headWord;
     if (!word) return false;

@@ -59,6 +59,11 @@ const statementShapes = z.discriminatedUnion('keyword', [
   z.object({ keyword: z.literal('coordination-rule'), words: z.tuple([word.extend({ text: z.literal('collins') })]) }),
   z.object({ keyword: z.literal('raise-subject'), words: z.array(word).min(7, 'write raise-subject CATEGORY... under CATEGORY... with PATTERN... without PATTERN...') }),
   z.object({ keyword: z.literal('head'), words: z.array(word).min(1, 'name the parent categories, or * for the default block') }),
+  z.object({
+    keyword: z.literal('words'),
+    words: z.tuple([word.extend({ text: z.string().regex(/^[a-z][a-z0-9-]*$/, 'a word list is named in lower-case letters, digits and hyphens') })], word).refine((w) => w.length >= 2, 'name the list, then its words'),
+  }),
+  z.object({ keyword: z.literal('late-conjuncts'), words: z.array(word).min(1, 'name the phrase categories, or write late-conjuncts off') }),
   z.object({ keyword: z.literal('fixed'), words: z.array(word).min(1, 'name the words of the expression, at least two, or write fixed off') }),
   z.object({ keyword: z.enum(['left', 'right']), words: z.array(word).min(1, 'say how: each, any or first') }),
   z.object({ keyword: z.literal('label'), words: z.array(word).min(1, 'name the relation') }),
@@ -90,6 +95,31 @@ class TableLoader {
   private dropped = 0;
   /** The file whose statements are being compiled. */
   private link: Link = { file: '', lines: [], statements: [] };
+  /** Named word lists (`words titles Mr. Mrs.`) of the tables compiled so far in a chain, used as `@titles`. */
+  private lists = new Map<string, string[]>();
+
+  /**
+   * Takes in a file's word lists before its other statements, so that a list
+   * may be used above the line that defines it; a list named again grows.
+   */
+  private collectLists(link: Link): void {
+    for (const statement of link.statements) {
+      if (statement.keyword !== 'words') continue;
+      const [name, ...values] = statement.words.map((w) => w.text);
+      this.lists.set(name!, [...(this.lists.get(name!) ?? []), ...values]);
+    }
+  }
+
+  /** Values with `@name` replaced by the words of that list; an unknown list is reported. */
+  private expand(values: string[], at: { line: number; column: number }): string[] {
+    if (!values.some((value) => value.startsWith('@'))) return values;
+    return values.flatMap((value) => {
+      if (!value.startsWith('@')) return [value];
+      const list = this.lists.get(value.slice(1));
+      if (!list) this.problem('table-invalid', at, `no word list "${value.slice(1)}": define it with words ${value.slice(1)} WORD…`);
+      return list ?? [];
+    });
+  }
 
   /**
    * The table and every table under it, base first. `builds-on` chains are
@@ -141,9 +171,12 @@ class TableLoader {
       coordinationRule: undefined,
       raising: undefined,
       fixed: noFixedExpressions(),
+      lateConjuncts: undefined,
     };
+    this.lists = new Map();
     for (const link of links) {
       this.link = link;
+      this.collectLists(link);
       table = this.headLink(link, { ...table, name: link.file, blocks: new Map(table.blocks), fixed: copyFixedExpressions(table.fixed) });
     }
     this.finish();
@@ -162,6 +195,7 @@ class TableLoader {
           table.name = words[0]!.text;
           break;
         case 'builds-on':
+        case 'words':
           break;
         case 'punctuation':
           table.punctuation = this.anyOf(words);
@@ -182,6 +216,9 @@ class TableLoader {
             table.fixed.firstWords.add(forms[0]!);
             table.fixed.longest = Math.max(table.fixed.longest, forms.length);
           }
+          break;
+        case 'late-conjuncts':
+          table.lateConjuncts = words.length === 1 && words[0]!.text === 'off' ? undefined : { phrases: this.anyOf(words), file: link.file, line: statement.line };
           break;
         case 'raise-subject': {
           const at = (word: string) => words.findIndex((w) => w.text === word);
@@ -228,8 +265,10 @@ class TableLoader {
   labels(path: string, text?: string): LabelTable {
     const links = this.chain(path, 'labels', text);
     let table: LabelTable = { kind: 'labels', name: path, rules: [], otherwise: 'dep' };
+    this.lists = new Map();
     for (const link of links) {
       this.link = link;
+      this.collectLists(link);
       const own: LabelRule[] = [];
       table = { ...table, name: link.file };
       for (const statement of link.statements) {
@@ -239,6 +278,7 @@ class TableLoader {
             table.name = words[0]!.text;
             break;
           case 'builds-on':
+          case 'words':
             break;
           case 'label': {
             const rule = this.rule(statement);
@@ -346,11 +386,12 @@ class TableLoader {
 
   private patternSyntax(w: WordSyntax): PatternSyntax | undefined {
     try {
-      const syntax = parse(w.text, { startRule: 'Pattern' });
+      const syntax = parse(w.text, { startRule: 'Pattern' }) as PatternSyntax;
       if (syntax.test && !['pos', 'form', 'lemma'].includes(syntax.test.key)) {
         this.problem('table-invalid', w, `"${syntax.test.key}" is not a test of a head word: pos, form or lemma`);
         return undefined;
       }
+      if (syntax.test) syntax.test.values = this.expand(syntax.test.values, w);
       return syntax;
     } catch (error) {
       if (!(error instanceof GrammarError)) throw error;
@@ -408,7 +449,7 @@ class TableLoader {
       if (wrong) this.problem('table-invalid', w, `${key} is ${allowed.join(' or ')}, not "${wrong}"`);
       return (context) => values.includes(context[key]);
     }
-    const test = valueTest(values, key !== 'pos');
+    const test = valueTest(this.expand(values, w), key !== 'pos');
     if (key === 'pos') return (context) => test(context.word.pos);
     if (key === 'form') return (context) => test(context.word.form);
     return (context) => test(context.word.lemma ?? context.word.form);

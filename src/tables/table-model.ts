@@ -60,6 +60,14 @@ export interface HeadTable {
    * as `fixed` (the restructuring step join-fixed-expressions).
    */
   fixed: FixedExpressions;
+  /**
+   * Late conjuncts (`late-conjuncts S VP`): in a phrase of these categories
+   * that holds no coordination of its own children, a coordinator after the
+   * head child, followed by a child of the phrase's own category, makes that
+   * child a conjunct of the head (`[It rained], but [we went out]`), the
+   * restructuring step attach-late-conjuncts. Undefined: off.
+   */
+  lateConjuncts: { phrases: Matcher; file: string; line: number } | undefined;
 }
 
 /** The multiword function words of a head table, ready for lookup while converting. */

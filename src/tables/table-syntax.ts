@@ -20,6 +20,8 @@ export interface StatementSyntax {
 export interface HeadWordTestSyntax {
   key: string;
   values: string[];
+  /** `[form!=…]`: the test holds for words with none of the values. */
+  negated?: boolean;
 }
 
 /** A label pattern, `VB*[lemma=be,have]`. */

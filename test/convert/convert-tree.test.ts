@@ -151,3 +151,66 @@ describe('restructuring step join-fixed-expressions', () => {
     expect(explainHeads(read(`( ${fog} (ID fog.1))`).trees[0]!, { heads: off })!.some((step) => step.restructured)).toBe(false);
   });
 });
+
+// A clause coordinated with the clause it ends: UD (v2 guidelines on coordination, from memory) makes
+// the later clause a conj of the first clause's head, with the coordinator, and what stands between
+// it and the later clause, hanging from that clause.
+describe('restructuring step attach-late-conjuncts', () => {
+  const fog = '(S (NP-SBJ (DT The) (NN ferry)) (VP (VBD waited)) (, ,) (CC but) (ADVP (RB then)) (S (NP-SBJ (DT the) (NN fog)) (VP (VBD lifted))) (. .))';
+
+  it('makes the later clause a conjunct of the head, the coordinator and the adverb before it its dependents', () => {
+    expect(arcs(fog, 'en-content', { labelTable: 'en-ud' })).toEqual([
+      'The→ferry/det', 'ferry→waited/nsubj', 'waited→ROOT/root', ',→lifted/punct', 'but→lifted/cc', 'then→lifted/advmod', 'the→fog/det', 'fog→lifted/nsubj', 'lifted→waited/conj', '.→waited/punct',
+    ]);
+  });
+
+  it('is switched off by `late-conjuncts off`, and named by heads explain where it acts', async () => {
+    const { compileHeadTable } = await import('../../src/tables/load-table.js');
+    const { explainHeads } = await import('../../src/api/explain.js');
+    const off = compileHeadTable('table plain\nbuilds-on en-content\nlate-conjuncts off\n');
+    expect(arcs(fog, 'en-content', { heads: off, labelTable: 'en-ud' })).toContain('but→waited/cc');
+    const top = explainHeads(read(`( ${fog} (ID fog.2))`).trees[0]!, { heads: 'en-content' })![0]!;
+    expect(top.restructured).toEqual([expect.stringMatching(/^attach-late-conjuncts \(en-content line \d+\): "lifted" is a conjunct of "waited"; "but" hangs from the conjunct after it$/)]);
+  });
+
+  it('leaves a clause alone whose coordinator comes before its head ("But the fog lifted")', () => {
+    expect(arcs('(S (CC But) (NP-SBJ (DT the) (NN fog)) (VP (VBD lifted)))', 'en-content', { labelTable: 'en-ud' })[0]).toBe('But→lifted/cc');
+  });
+});
+
+describe('coordination', () => {
+  it('takes a phrase of the first conjunct\'s kind after an adverb for the conjunct, and hangs the adverb from it', () => {
+    // UD v2 guidelines (from memory): a coordinator and a modifier of the second conjunct depend on it.
+    expect(arcs('(NP (NP (NNS nets)) (CC and) (ADVP (RB also)) (NP (NNS ropes)))', 'en-content', { labelTable: 'en-ud' })).toEqual([
+      'nets→ROOT/root', 'and→ropes/cc', 'also→ropes/advmod', 'ropes→nets/conj',
+    ]);
+  });
+});
+
+// Names and verbs in en-content, against UD's English conventions (from memory): a person's name is
+// flat from its first word, a title before it an nmod:desc; a place name ending in a word for a
+// place is a compound headed by that word; a verb that is not an auxiliary heads its verb phrase.
+describe('en-content: names, auxiliaries and raised subjects', () => {
+  it('heads a name after a title by its first word after the titles, the title as nmod:desc', () => {
+    expect(arcs('(NP (NNP Capt.) (NNP Mira) (NNP Holm))', 'en-content', { labelTable: 'en-ud' })).toEqual(['Capt.→Mira/nmod:desc', 'Mira→ROOT/root', 'Holm→Mira/flat']);
+  });
+
+  it('heads a place name by its place word, a describing word before it as amod', () => {
+    expect(arcs('(NP (NNP Vessel) (NNP Harbour) (NNP Museum) (POS \'s))', 'en-content', { labelTable: 'en-ud' })).toEqual([
+      'Vessel→Museum/compound', 'Harbour→Museum/compound', 'Museum→ROOT/root', '\'s→Museum/case',
+    ]);
+    expect(arcs('(NP (NNP North) (NNP Harbour))', 'en-content', { labelTable: 'en-ud' })).toEqual(['North→Harbour/amod', 'Harbour→ROOT/root']);
+  });
+
+  it('lets an auxiliary give way to the verb phrase after it, but not another verb ("felt rested")', () => {
+    expect(arcs('(S (NP-SBJ (NNP Mira)) (VP (VBD was) (VP (VBN rested))))', 'en-content', { labelTable: 'en-ud' })).toContain('rested→ROOT/root');
+    expect(arcs('(S (NP-SBJ (NNP Mira)) (VP (VBD felt) (VP (VBN rested))))', 'en-content', { labelTable: 'en-ud' })).toContain('felt→ROOT/root');
+  });
+
+  it('does not raise the subject of a clause whose finite verb stands beside its predicate, one level down', () => {
+    const said = '(S (NP-SBJ (NNP Mira)) (VP (VBD said) (S (NP-SBJ (DT the) (NN ferry)) (VP (VBZ is) (ADVP (RB perhaps)) (NP-PRD (DT the) (JJS best) (NN boat))))))';
+    expect(arcs(said, 'en-content', { labelTable: 'en-ud' })).toContain('ferry→boat/nsubj');
+    const made = '(S (NP-SBJ (NNP Mira)) (VP (VBD made) (S (NP-SBJ (DT the) (NN ferry)) (VP (VB wait)))))';
+    expect(arcs(made, 'en-content', { labelTable: 'en-ud' })).toContain('ferry→made/obj');
+  });
+});

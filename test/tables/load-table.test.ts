@@ -114,6 +114,38 @@ describe('the table language', () => {
     expect(convert('(S (NP-SBJ (NN keeper)) (VP (VBD said) (SBAR (IN that) (S (NP-SBJ (NN fog)) (VP (VBD fell))))))')[4]).toBe('fell/ccomp');
   });
 
+  it('names word lists once (`words NAME …`, growing line by line) and uses them as @NAME in tests and conditions', async () => {
+    const { headOf } = await import('../support/convert.js');
+    const table = compileHeadTable(['table t', 'words titles Capt. Dr.', 'words titles Skipper', 'head NP', '  left any NNP[form!=@titles] if NNP[form=@titles]', '  left first'].join('\n'));
+    const step = table.blocks.get('NP')!.steps[0]!;
+    const candidate = (form: string) => ({ category: 'NNP', functions: [], headWord: { pos: 'NNP', form, lemma: undefined } });
+    expect([step.patterns[0]!(candidate('Mira')), step.patterns[0]!(candidate('skipper')), step.guards[0]!(candidate('Dr.'))]).toEqual([true, false, true]);
+    // The shipped English table: a title's name heads ("Capt. Mira Holm"), a describing word gives way to the last word.
+    expect(headOf('(NP (NNP Capt.) (NNP Mira) (NNP Holm))', 'en-content')).toBe('Mira');
+    expect(headOf('(NP (NNP North) (NNP Harbour))', 'en-content')).toBe('Harbour');
+    const labels = compileLabelTable('table l\nwords ranks Capt.\nlabel nmod:desc form=@ranks\notherwise dep\n');
+    expect(labels.rules).toHaveLength(1);
+  });
+
+  it('reports an unknown word list and a badly named one at their words', () => {
+    expect(problems(() => compileHeadTable('table t\nhead NP\n  left any NNP[form=@nope]\n'))).toEqual([
+      'table-invalid@3:12: no word list "nope": define it with words nope WORD…',
+    ]);
+    expect(problems(() => compileHeadTable('table t\nwords Ranks Capt.\nhead NP\n  left first\n'))).toEqual([
+      'table-invalid@2:7: words: a word list is named in lower-case letters, digits and hyphens',
+    ]);
+    expect(problems(() => compileLabelTable('table t\nwords ranks\notherwise dep\n'))).toEqual(['table-invalid@2:1: words: name the list, then its words']);
+  });
+
+  it('switches late conjuncts on for some phrase categories, and off again in a table built on it', () => {
+    const on = compileHeadTable('table t\nlate-conjuncts S SINV\nhead S\n  left first\n');
+    expect(on.lateConjuncts).toMatchObject({ file: 'table.heads', line: 2 });
+    expect(on.lateConjuncts!.phrases({ category: 'SINV', functions: [] })).toBe(true);
+    expect(on.lateConjuncts!.phrases({ category: 'NP', functions: [] })).toBe(false);
+    expect(compileHeadTable('table u\nbuilds-on en-content\nlate-conjuncts off\n').lateConjuncts).toBeUndefined();
+    expect(loadHeadTable('en-content').lateConjuncts).toBeDefined();
+  });
+
   it('loads every shipped table, and documents each block with a comment', async () => {
     const { readdirSync, readFileSync } = await import('node:fs');
     const { headrulesFolder } = await import('../../src/tables/load-table.js');
