@@ -4,7 +4,7 @@ import { reportWordlessTree } from '../convert/report-wordless-tree.js';
 import { emptyTally, type PairingTally } from '../evaluate/pair-with-gold.js';
 import { BracketRoundTrip, DependencyRoundTrip, type RoundTripReport, type RoundTripSample } from '../evaluate/roundtrip.js';
 import { scoreConversion, type ConversionScore } from '../evaluate/score-conversion.js';
-import { collectPhrases, suggestBlocks, writeSuggestedTable, type LearnedBlock } from '../evaluate/suggest-heads.js';
+import { collectPhrases, suggestBlocks, suggestLateConjuncts, writeSuggestedTable, type LearnedBlock } from '../evaluate/suggest-heads.js';
 import { collectLabelSamples, learnLabels, writeLearnedLabels, type LearnedLabels } from '../evaluate/suggest-labels.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
@@ -175,7 +175,8 @@ export async function suggestHeads(
   const pairing = emptyTally();
   const collected = await collectPhrases(asAsync(trees), asAsync(gold), settings, report, pairing);
   const { changed, kept } = suggestBlocks(collected.samples, settings.heads, { minimumPhrases: learning.minimumPhrases, minimumGain: learning.minimumGain });
-  const text = writeSuggestedTable(learning.name, learning.baseReference ?? learning.base, collected.sentences, changed, kept, learning.inlineBase) + '\n';
+  const late = suggestLateConjuncts(collected.late, learning.minimumPhrases);
+  const text = writeSuggestedTable(learning.name, learning.baseReference ?? learning.base, collected.sentences, changed, kept, learning.inlineBase, late) + '\n';
   return { text, sentences: collected.sentences, changed, kept, pairing };
 }
 

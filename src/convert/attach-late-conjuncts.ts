@@ -20,6 +20,12 @@ export const attachLateConjunctsStep = 'attach-late-conjuncts';
 export function findLateConjuncts(phrase: PhraseNode, candidates: Candidate[], head: number, table: HeadTable): Coordination | undefined {
   const late = table.lateConjuncts;
   if (!late || !late.phrases(phrase)) return undefined;
+  const found = lateConjunctsOf(phrase, candidates, head, table);
+  return found && { ...found, late: { file: late.file, line: late.line } };
+}
+
+/** The late conjuncts a phrase would have, whether or not the table switches the step on for it (heads suggest asks). */
+export function lateConjunctsOf(phrase: Pick<PhraseNode, 'category'>, candidates: Candidate[], head: number, table: Pick<HeadTable, 'coordinators' | 'punctuation'>): Coordination | undefined {
   const conjuncts = [head];
   const coordinators: number[] = [];
   for (let k = head + 1; k + 1 < candidates.length; k++) {
@@ -37,5 +43,5 @@ export function findLateConjuncts(phrase: PhraseNode, candidates: Candidate[], h
   const high = conjuncts[conjuncts.length - 1]!;
   const separators: number[] = [];
   for (let i = head + 1; i < high; i++) if (table.punctuation(candidates[i]!)) separators.push(i);
-  return { conjuncts, coordinators, separators, late: { file: late.file, line: late.line } };
+  return { conjuncts, coordinators, separators };
 }

@@ -1,14 +1,15 @@
 import type { Report } from '../diagnostics/diagnostic.js';
 import type { ConversionSettings } from '../convert/convert-tree.js';
 import { findHeads, candidateOf, chooseFrom, type ParentLabel } from '../convert/find-heads.js';
-import { phrasesBottomUp, type ConversionNode } from '../convert/conversion-tree.js';
+import { headWordOf, phrasesBottomUp, type ConversionNode, type PhraseNode } from '../convert/conversion-tree.js';
+import { lateConjunctsOf } from '../convert/attach-late-conjuncts.js';
 import { raisedSubject } from '../convert/attach-dependents.js';
 import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
 import { oracleChooser } from '../convert/oracle-heads.js';
 import { prepareTree } from '../convert/prepare-tree.js';
 import { headVector } from '../analysis/heads.js';
 import type { Tree } from '../model/constituency.js';
-import type { DependencySentence } from '../model/dependency.js';
+import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import type { Candidate } from '../tables/label-pattern.js';
 import type { HeadTable } from '../tables/table-model.js';
 
@@ -78,8 +79,9 @@ export async function collectPhrases(
   settings: ConversionSettings,
   report: Report = () => undefined,
   tally: PairingTally = emptyTally(),
-): Promise<{ samples: Map<string, Sample[]>; sentences: number; misaligned: number }> {
+): Promise<{ samples: Map<string, Sample[]>; sentences: number; misaligned: number; late: Map<string, LateConjunctTally> }> {
   const samples = new Map<string, Sample[]>();
+  const late = new Map<string, LateConjunctTally>();
   let sentences = 0;
   for await (const pair of pairWithGold(trees, gold, settings.traces, report, tally)) {
     const prepared = prepareTree(pair.tree, settings.traces);
@@ -101,12 +103,46 @@ export async function collectPhrases(
       if (node.coordination || !node.head || node.head.reason.startsWith('coordination') || raising.has(node)) continue;
       const goldChild = oracle(node);
       if (goldChild === undefined || goldChild < 0) continue;
+      const candidates = node.children.map(candidateOf);
       const list = samples.get(node.category) ?? [];
-      list.push({ parent: { category: node.category, functions: node.functions }, candidates: node.children.map(candidateOf), gold: goldChild });
+      list.push({ parent: { category: node.category, functions: node.functions }, candidates, gold: goldChild });
       samples.set(node.category, list);
+      if (!settings.heads.lateConjuncts) tallyLateConjuncts(node, candidates, goldChild, pair.gold, settings.heads, late);
     }
   }
-  return { samples, sentences, misaligned: tally.misaligned };
+  return { samples, sentences, misaligned: tally.misaligned, late };
+}
+
+/** For one category of phrase: how often a child after a coordinator after the head looks like a late conjunct, and how often the gold makes it a `conj` of the head. */
+export interface LateConjunctTally {
+  seen: number;
+  conjuncts: number;
+}
+
+/** Counts a phrase's would-be late conjuncts, and those the gold draws as conjuncts of its head word. */
+function tallyLateConjuncts(node: PhraseNode, candidates: Candidate[], head: number, gold: DependencySentence, table: HeadTable, late: Map<string, LateConjunctTally>): void {
+  const found = lateConjunctsOf(node, candidates, head, table);
+  if (!found) return;
+  const words = gold.lines.filter((line): line is DependencyWord => line.type === 'word');
+  const headIndex = headWordOf(node.children[head]!).index;
+  let tally = late.get(node.category);
+  if (!tally) late.set(node.category, (tally = { seen: 0, conjuncts: 0 }));
+  for (const conjunct of found.conjuncts.slice(1)) {
+    const word = words[headWordOf(node.children[conjunct]!).index - 1];
+    tally.seen++;
+    if (word && Number(word.head) === headIndex && word.deprel.split(':')[0] === 'conj') tally.conjuncts++;
+  }
+}
+
+/**
+ * The categories whose would-be late conjuncts the gold mostly draws as conjuncts (at least
+ * `minimumPhrases` of them, more than half), for a `late-conjuncts` line; none when the base has one.
+ */
+export function suggestLateConjuncts(late: Map<string, LateConjunctTally>, minimumPhrases: number): Array<{ category: string } & LateConjunctTally> {
+  return [...late]
+    .filter(([, tally]) => tally.seen >= minimumPhrases && tally.conjuncts * 2 > tally.seen)
+    .sort((a, b) => b[1].seen - a[1].seen)
+    .map(([category, tally]) => ({ category, ...tally }));
 }
 
 /** The list of a block that decides a phrase: the first whose function tags its label carries. */
@@ -366,7 +402,15 @@ function joinWordTests(patterns: readonly string[]): string[] {
  * which the new table repeats (its own `table` line left out) before the
  * changed blocks, which replace the base's blocks of the same categories.
  */
-export function writeSuggestedTable(name: string, base: string, sentences: number, changed: LearnedBlock[], kept: LearnedBlock[], inlineBase?: string): string {
+export function writeSuggestedTable(
+  name: string,
+  base: string,
+  sentences: number,
+  changed: LearnedBlock[],
+  kept: LearnedBlock[],
+  inlineBase?: string,
+  late: ReadonlyArray<{ category: string } & LateConjunctTally> = [],
+): string {
   const share = (n: number, of: number) => `${n.toLocaleString('en-US')} (${((100 * n) / of).toFixed(1)}%)`;
   const lines = [
     `# ${name}: suggested by treebridge heads suggest from ${sentences.toLocaleString('en-US')} sentences with gold`,
@@ -384,6 +428,11 @@ export function writeSuggestedTable(name: string, base: string, sentences: numbe
     lines.push('', `table ${name}`, '', `# The base table, as it was (this file replaces it):`);
     for (const line of inlineBase.split('\n')) if (!/^\s*table\s/.test(line)) lines.push(line);
     lines.push('', '# The learned blocks, replacing those above for their categories:', '');
+  }
+  if (late.length > 0) {
+    const support = late.map((l) => `${l.category} ${share(l.conjuncts, l.seen)} of ${l.seen.toLocaleString('en-US')}`).join(', ');
+    lines.push(`# A child of the phrase's own category after a coordinator after the head is mostly a`, `# conjunct of the head in the gold (${support}): restructuring step attach-late-conjuncts.`);
+    lines.push(`late-conjuncts ${late.map((l) => l.category).join(' ')}`, '');
   }
   for (const block of changed) {
     lines.push(`# ${block.category}: ${block.phrases.toLocaleString('en-US')} phrases; ${base} right in ${share(block.baseRight, block.phrases)}, this block in ${share(block.learnedRight, block.phrases)}.`);

@@ -63,3 +63,24 @@ describe('learning a head block from gold', () => {
     ).toEqual(["left each *-PRD if VBZ[form=is,'s] VBD[form=was]", 'left each VP VB', 'right each NN']);
   });
 });
+
+describe('learning restructuring steps from gold', () => {
+  it('switches late conjuncts on for a category whose later clause the gold makes a conjunct of the head', async () => {
+    const { suggestHeads } = await import('../../src/api/evaluate.js');
+    const { readBracketedText } = await import('../../src/formats/bracketed/read-bracketed.js');
+    const { readConlluText } = await import('../../src/formats/conllu/read-conllu.js');
+    const clauses = [
+      ['ferry', 'waited', 'fog', 'lifted'],
+      ['keeper', 'slept', 'gulls', 'cried'],
+      ['crew', 'rowed', 'tide', 'turned'],
+    ];
+    const trees = clauses.map(([a, b, c, d], i) => `( (S (NP-SBJ (NN ${a})) (VP (VBD ${b})) (, ,) (CC but) (S (NP-SBJ (NN ${c})) (VP (VBD ${d})))) (ID late.${i + 1}))`).join('\n');
+    const gold = clauses
+      .map(([a, b, c, d], i) => [`# sent_id = late.${i + 1}`, `1\t${a}\t_\tNOUN\tNN\t_\t2\tnsubj\t_\t_`, `2\t${b}\t_\tVERB\tVBD\t_\t0\troot\t_\t_`, '3\t,\t_\tPUNCT\t,\t_\t6\tpunct\t_\t_', '4\tbut\t_\tCCONJ\tCC\t_\t6\tcc\t_\t_', `5\t${c}\t_\tNOUN\tNN\t_\t6\tnsubj\t_\t_`, `6\t${d}\t_\tVERB\tVBD\t_\t2\tconj\t_\t_`, ''].join('\n'))
+      .join('\n');
+    const learned = await suggestHeads(readBracketedText(trees, {}, () => undefined), readConlluText(gold, {}, () => undefined), { base: 'generic', minimumPhrases: 2 });
+    expect(learned.text).toContain('\nlate-conjuncts S\n');
+    expect(learned.text).toContain('(S 3 (100.0%) of 3)');
+    expect(compileHeadTable(learned.text).lateConjuncts).toBeDefined();
+  });
+});
