@@ -5,6 +5,7 @@ import { emptyTally, type PairingTally } from '../evaluate/pair-with-gold.js';
 import { BracketRoundTrip, DependencyRoundTrip, type RoundTripReport, type RoundTripSample } from '../evaluate/roundtrip.js';
 import { scoreConversion, type ConversionScore } from '../evaluate/score-conversion.js';
 import { collectPhrases, suggestBlocks, suggestLateConjuncts, writeSuggestedTable, type LearnedBlock } from '../evaluate/suggest-heads.js';
+import { learnRaising, raisesObservation, type LearnedRaising, type RaisingObservation } from '../evaluate/learn-raising.js';
 import { collectLabelSamples, learnLabels, writeLearnedLabels, type LearnedLabels } from '../evaluate/suggest-labels.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
@@ -174,9 +175,12 @@ export async function suggestHeads(
   const { settings } = resolveConversionOptions({ heads: learning.base, traces, coordination, punctuation: 'phrase' });
   const pairing = emptyTally();
   const collected = await collectPhrases(asAsync(trees), asAsync(gold), settings, report, pairing);
-  const { changed, kept } = suggestBlocks(collected.samples, settings.heads, { minimumPhrases: learning.minimumPhrases, minimumGain: learning.minimumGain });
+  // A subject raising rule first: the clauses it raises hold their gold head in the subject and are left out of head learning.
+  const raising = learnRaising(collected.raising, learning.minimumPhrases);
+  const samples = raising ? withoutRaised(collected.samples, collected.raising, raising) : collected.samples;
+  const { changed, kept } = suggestBlocks(samples, settings.heads, { minimumPhrases: learning.minimumPhrases, minimumGain: learning.minimumGain });
   const late = suggestLateConjuncts(collected.late, learning.minimumPhrases);
-  const text = writeSuggestedTable(learning.name, learning.baseReference ?? learning.base, collected.sentences, changed, kept, learning.inlineBase, late) + '\n';
+  const text = writeSuggestedTable(learning.name, learning.baseReference ?? learning.base, collected.sentences, changed, kept, learning.inlineBase, late, raising) + '\n';
   return { text, sentences: collected.sentences, changed, kept, pairing };
 }
 
@@ -218,4 +222,11 @@ export async function suggestLabels(
   const { samples, sentences } = await collectLabelSamples(asAsync(trees), asAsync(gold), settings, report, pairing, skip);
   const learned = learnLabels(samples, sentences, learning.minimumSupport);
   return { text: writeLearnedLabels(learning.name, learned), learned, pairing };
+}
+
+/** The samples without the clauses a learned raising rule raises. */
+function withoutRaised<T extends object>(samples: Map<string, T[]>, observations: readonly RaisingObservation[], rule: LearnedRaising): Map<string, T[]> {
+  const raised = new Set<object>();
+  for (const o of observations) if (o.sample && raisesObservation(rule, o)) raised.add(o.sample);
+  return new Map([...samples].map(([category, list]) => [category, list.filter((sample) => !raised.has(sample))]));
 }

@@ -3,6 +3,7 @@ import type { ConversionSettings } from '../convert/convert-tree.js';
 import { findHeads, candidateOf, chooseFrom, type ParentLabel } from '../convert/find-heads.js';
 import { headWordOf, phrasesBottomUp, type ConversionNode, type PhraseNode } from '../convert/conversion-tree.js';
 import { lateConjunctsOf } from '../convert/attach-late-conjuncts.js';
+import { observeRaising, writeRaising, type LearnedRaising, type RaisingObservation } from './learn-raising.js';
 import { raisedSubject } from '../convert/attach-dependents.js';
 import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
 import { oracleChooser } from '../convert/oracle-heads.js';
@@ -79,9 +80,10 @@ export async function collectPhrases(
   settings: ConversionSettings,
   report: Report = () => undefined,
   tally: PairingTally = emptyTally(),
-): Promise<{ samples: Map<string, Sample[]>; sentences: number; misaligned: number; late: Map<string, LateConjunctTally> }> {
+): Promise<{ samples: Map<string, Sample[]>; sentences: number; misaligned: number; late: Map<string, LateConjunctTally>; raising: RaisingObservation[] }> {
   const samples = new Map<string, Sample[]>();
   const late = new Map<string, LateConjunctTally>();
+  const observations: RaisingObservation[] = [];
   let sentences = 0;
   for await (const pair of pairWithGold(trees, gold, settings.traces, report, tally)) {
     const prepared = prepareTree(pair.tree, settings.traces);
@@ -99,18 +101,23 @@ export async function collectPhrases(
         for (const child of node.children) if (child.kind === 'phrase' && raisedSubject(node, child, rule) !== -1) raising.add(child);
       }
     }
+    const sampleOf = new Map<PhraseNode, Sample>();
     for (const node of phrasesBottomUp(prepared.root)) {
+      // Inner clauses first: their samples are known when the phrase above them is looked at.
+      if (!rule) observeRaising(node, heads, observations, sampleOf);
       if (node.coordination || !node.head || node.head.reason.startsWith('coordination') || raising.has(node)) continue;
       const goldChild = oracle(node);
       if (goldChild === undefined || goldChild < 0) continue;
       const candidates = node.children.map(candidateOf);
       const list = samples.get(node.category) ?? [];
-      list.push({ parent: { category: node.category, functions: node.functions }, candidates, gold: goldChild });
+      const sample = { parent: { category: node.category, functions: node.functions }, candidates, gold: goldChild };
+      list.push(sample);
+      sampleOf.set(node, sample);
       samples.set(node.category, list);
       if (!settings.heads.lateConjuncts) tallyLateConjuncts(node, candidates, goldChild, pair.gold, settings.heads, late);
     }
   }
-  return { samples, sentences, misaligned: tally.misaligned, late };
+  return { samples, sentences, misaligned: tally.misaligned, late, raising: observations };
 }
 
 /** For one category of phrase: how often a child after a coordinator after the head looks like a late conjunct, and how often the gold makes it a `conj` of the head. */
@@ -410,6 +417,7 @@ export function writeSuggestedTable(
   kept: LearnedBlock[],
   inlineBase?: string,
   late: ReadonlyArray<{ category: string } & LateConjunctTally> = [],
+  raising?: LearnedRaising,
 ): string {
   const share = (n: number, of: number) => `${n.toLocaleString('en-US')} (${((100 * n) / of).toFixed(1)}%)`;
   const lines = [
@@ -429,6 +437,7 @@ export function writeSuggestedTable(
     for (const line of inlineBase.split('\n')) if (!/^\s*table\s/.test(line)) lines.push(line);
     lines.push('', '# The learned blocks, replacing those above for their categories:', '');
   }
+  if (raising) lines.push(...writeRaising(raising), '');
   if (late.length > 0) {
     const support = late.map((l) => `${l.category} ${share(l.conjuncts, l.seen)} of ${l.seen.toLocaleString('en-US')}`).join(', ');
     lines.push(`# A child of the phrase's own category after a coordinator after the head is mostly a`, `# conjunct of the head in the gold (${support}): restructuring step attach-late-conjuncts.`);

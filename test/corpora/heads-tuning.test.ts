@@ -32,11 +32,11 @@ describe.each([
   ['odd', 'even'],
   ['even', 'odd'],
 ] as const)('learning on the %s documents, scoring on the %s ones', (train, test) => {
-  it('from generic reaches UAS ≥ 0.88', async () => {
+  it('from generic reaches UAS ≥ 0.89', async () => {
     const table = await suggest('generic', halves[train], `generic-${train}`);
     const score = await uas(table, halves[test]);
     console.log(`generic → suggested on ${train} half, scored on ${test}: UAS ${score}`);
-    expect(score).toBeGreaterThanOrEqual(0.88);
+    expect(score).toBeGreaterThanOrEqual(0.89);
   });
 
   it('from en-content scores no lower than en-content', async () => {

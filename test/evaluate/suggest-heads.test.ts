@@ -84,3 +84,39 @@ describe('learning restructuring steps from gold', () => {
     expect(compileHeadTable(learned.text).lateConjuncts).toBeDefined();
   });
 });
+
+describe('learning subject raising from gold', () => {
+  // UD v2 (from memory): the subject of a small clause under a verb is that verb's object
+  // ("made [the ferry wait]"), while a clause with a finite verb keeps its subject.
+  it('writes a raise-subject line: the clause and phrase categories, the subject tag, and the finite tags that block it', async () => {
+    const { suggestHeads } = await import('../../src/api/evaluate.js');
+    const { readBracketedText } = await import('../../src/formats/bracketed/read-bracketed.js');
+    const { readConlluText } = await import('../../src/formats/conllu/read-conllu.js');
+    const nouns = ['ferry', 'keeper', 'crew', 'gull', 'tide', 'boat'];
+    const small = nouns.map((noun, i) => ({
+      tree: `( (S (NP-SBJ (NNP Mira)) (VP (VBD made) (S (NP-SBJ (DT the) (NN ${noun})) (VP (VB wait))))) (ID small.${i + 1}))`,
+      gold: [`# sent_id = small.${i + 1}`, '1\tMira\t_\tPROPN\tNNP\t_\t2\tnsubj\t_\t_', '2\tmade\t_\tVERB\tVBD\t_\t0\troot\t_\t_', '3\tthe\t_\tDET\tDT\t_\t4\tdet\t_\t_', `4\t${noun}\t_\tNOUN\tNN\t_\t2\tobj\t_\t_`, '5\twait\t_\tVERB\tVB\t_\t2\txcomp\t_\t_', ''].join('\n'),
+    }));
+    const finite = nouns.map((noun, i) => ({
+      tree: `( (S (NP-SBJ (NNP Mira)) (VP (VBD said) (S (NP-SBJ (DT the) (NN ${noun})) (VP (VBD waited))))) (ID finite.${i + 1}))`,
+      gold: [`# sent_id = finite.${i + 1}`, '1\tMira\t_\tPROPN\tNNP\t_\t2\tnsubj\t_\t_', '2\tsaid\t_\tVERB\tVBD\t_\t0\troot\t_\t_', '3\tthe\t_\tDET\tDT\t_\t4\tdet\t_\t_', `4\t${noun}\t_\tNOUN\tNN\t_\t5\tnsubj\t_\t_`, '5\twaited\t_\tVERB\tVBD\t_\t2\tccomp\t_\t_', ''].join('\n'),
+    }));
+    const all = [...small, ...finite];
+    const learned = await suggestHeads(
+      readBracketedText(all.map((s) => s.tree).join('\n'), {}, () => undefined),
+      readConlluText(all.map((s) => s.gold).join('\n'), {}, () => undefined),
+      { base: 'generic', minimumPhrases: 3 },
+    );
+    expect(learned.text).toContain('\nraise-subject S under VP with *-SBJ without VBD\n');
+    expect(learned.text).toContain('in 6 of 6 cases');
+    // The written table raises the small clause's subject and leaves the finite clause's alone.
+    const { arcs } = await import('../support/convert.js');
+    const { mkdtempSync, writeFileSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const { tmpdir } = await import('node:os');
+    const path = join(mkdtempSync(join(tmpdir(), 'treebridge-raise-')), 'learned.heads');
+    writeFileSync(path, learned.text);
+    expect(arcs(small[0]!.tree, path)).toContain('ferry→made/obj');
+    expect(arcs(finite[0]!.tree, path)).not.toContain('ferry→said/obj');
+  });
+});
