@@ -218,6 +218,22 @@ console.log(row('treebridge to-brackets', conlluMB, bracketing) + `   (${Math.ro
     for (const [jobs, runs] of jobRuns) console.log(`  to-deps --jobs ${jobs}: ${fastest(runs).peakMB.toFixed(0)} and ${bigDeps.get(jobs)!.peakMB.toFixed(0)}`);
     console.log(`  validate: ${oneValidate.peakMB.toFixed(0)} and ${validate.peakMB.toFixed(0)}`);
     console.log(`  stats on the CoNLL-U of the ten copies (${(statSync(conllu).size / 1048576).toFixed(0)} MB): ${stats.peakMB.toFixed(0)}`);
+    const bigValidate = command(['validate', conllu]);
+    console.log(`  validate on the CoNLL-U of the ten copies: ${bigValidate.peakMB.toFixed(0)}`);
+
+    // The commands that read CoNLL-U, on the CoNLL-U of the file, at --jobs 1 and one job per core.
+    console.log(`\ncommands reading the CoNLL-U of the file, ${(statSync(oneConllu).size / 1048576).toFixed(1)} MB (fastest of ${rounds}):`);
+    console.log(`${'run'.padEnd(30)} ${'seconds'.padStart(8)} ${'words/s'.padStart(10)} ${'peak MB'.padStart(8)} ${'÷ --jobs 1'.padStart(12)}`);
+    for (const args of [['validate'], ['stats'], ['to-brackets', '-o', devNull]]) {
+      let single = 0;
+      for (const jobs of jobRuns.keys()) {
+        const runs: Measure[] = [];
+        for (let round = 0; round < rounds; round++) runs.push(command([...args, '--jobs', String(jobs), oneConllu]));
+        const m = fastest(runs);
+        single ||= m.seconds;
+        console.log(`${`treebridge ${args[0]} --jobs ${jobs}`.padEnd(30)} ${m.seconds.toFixed(2).padStart(8)} ${Math.round(words / m.seconds).toLocaleString('en-US').padStart(10)} ${m.peakMB.toFixed(0).padStart(8)} ${(m.seconds / single).toFixed(2).padStart(12)}`);
+      }
+    }
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

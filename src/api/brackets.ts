@@ -76,33 +76,45 @@ export async function* toBrackets(
   tally: BracketTally = emptyBracketTally(),
 ): AsyncGenerator<RebuiltTree> {
   const settings = resolveBracketOptions(options);
-  for await (const sentence of sentences) {
-    tally.read++;
-    const decoded = settings.lossless ? decodeBrackets(sentence) : undefined;
-    if (isBrokenCarry(decoded)) {
-      tally.skipped++;
-      report(diagnoseItem('carried-brackets-broken', `sentence ${itemName(sentence, tally.read)}: ${decoded.problem}; skipped`, sentence));
-      continue;
-    }
-    const result = decoded ? { tree: decoded, lifts: [] } : build(sentence, settings);
-    if (!result) {
-      tally.skipped++;
-      const checked = treeHeads(sentence);
-      const why = 'problem' in checked ? checked.problem : 'the heads do not form a tree';
-      report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, tally.read)}: ${why}; skipped`, sentence));
-      continue;
-    }
-    tally.built++;
-    if (settings.discontinuous) tally.discontinuousPhrases += countDiscontinuousPhrases(result.tree);
-    if (result.lifts.length > 0) {
-      tally.lifted += result.lifts.length;
-      tally.liftedSentences++;
-    }
-    const before = decoded ? decodeCarriedTrees(sentence, 'before') : [];
-    const after = decoded ? decodeCarriedTrees(sentence, 'after') : [];
-    tally.restored += before.length + after.length;
-    for (const tree of before) yield { tree, lifts: [] };
-    yield { tree: result.tree, sentence, lifts: result.lifts };
-    for (const tree of after) yield { tree, lifts: [] };
+  for await (const sentence of sentences) yield* rebuildSentence(sentence, settings, report, tally);
+}
+
+/**
+ * The trees of one sentence, as {@link toBrackets} gives them: its tree (or
+ * none, reported, when it is not a tree), and in lossless mode the trees
+ * without words it carries before and after it.
+ */
+export function* rebuildSentence(
+  sentence: DependencySentence,
+  settings: ReturnType<typeof resolveBracketOptions>,
+  report: Report,
+  tally: BracketTally,
+): Generator<RebuiltTree> {
+  tally.read++;
+  const decoded = settings.lossless ? decodeBrackets(sentence) : undefined;
+  if (isBrokenCarry(decoded)) {
+    tally.skipped++;
+    report(diagnoseItem('carried-brackets-broken', `sentence ${itemName(sentence, tally.read)}: ${decoded.problem}; skipped`, sentence));
+    return;
   }
+  const result = decoded ? { tree: decoded, lifts: [] } : build(sentence, settings);
+  if (!result) {
+    tally.skipped++;
+    const checked = treeHeads(sentence);
+    const why = 'problem' in checked ? checked.problem : 'the heads do not form a tree';
+    report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, tally.read)}: ${why}; skipped`, sentence));
+    return;
+  }
+  tally.built++;
+  if (settings.discontinuous) tally.discontinuousPhrases += countDiscontinuousPhrases(result.tree);
+  if (result.lifts.length > 0) {
+    tally.lifted += result.lifts.length;
+    tally.liftedSentences++;
+  }
+  const before = decoded ? decodeCarriedTrees(sentence, 'before') : [];
+  const after = decoded ? decodeCarriedTrees(sentence, 'after') : [];
+  tally.restored += before.length + after.length;
+  for (const tree of before) yield { tree, lifts: [] };
+  yield { tree: result.tree, sentence, lifts: result.lifts };
+  for (const tree of after) yield { tree, lifts: [] };
 }

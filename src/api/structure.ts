@@ -27,20 +27,29 @@ export async function analyseStructure(
   const counter = new CorpusStructureCounter();
   let notTrees = 0;
   for await (const sentence of sentences) {
-    const checked = treeHeads(sentence);
-    if ('problem' in checked) {
+    const structure = measureSentence(sentence, report);
+    if (!structure) {
       notTrees++;
-      let said = false;
-      checkHeads(sentence, (diagnostic) => {
-        said ||= diagnostic.severity === 'error';
-        report(diagnostic);
-      });
-      if (!said) report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence)}: ${checked.problem}; left out`, sentence));
       continue;
     }
-    const structure = analyseTree(checked.heads);
     counter.add(structure);
     await each?.(sentence, structure);
   }
   return { figures: counter.result(), notTrees };
+}
+
+/**
+ * The structure of one sentence; undefined (and reported, at the word where its
+ * heads go wrong when the problem has one) when its heads do not form a tree.
+ */
+export function measureSentence(sentence: DependencySentence, report: Report): TreeStructure | undefined {
+  const checked = treeHeads(sentence);
+  if (!('problem' in checked)) return analyseTree(checked.heads);
+  let said = false;
+  checkHeads(sentence, (diagnostic) => {
+    said ||= diagnostic.severity === 'error';
+    report(diagnostic);
+  });
+  if (!said) report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence)}: ${checked.problem}; left out`, sentence));
+  return undefined;
 }

@@ -1,3 +1,4 @@
+import { ownCopy } from '../model/own-copy.js';
 import { diagnose, type Diagnostic, type Report } from '../diagnostics/diagnostic.js';
 import type { Tree } from '../model/constituency.js';
 
@@ -40,7 +41,8 @@ export class SentenceIdCheck {
     const here = tree.source.pointAt(offset);
     const first = this.seen.get(tree.id);
     if (first === undefined) {
-      this.seen.set(tree.id, `${file}:${here.line}:${here.column}`);
+      // A copy: the identifier read is a slice of the input, which a kept slice would keep whole.
+      this.seen.set(ownCopy(tree.id), `${file}:${here.line}:${here.column}`);
       return;
     }
     this.report(

@@ -4,6 +4,9 @@ import type { DependencySentence, DependencyWord } from '../model/dependency.js'
 import { checkDependencyTree } from './check-dependency-tree.js';
 import { checkWordColumns } from './check-word-columns.js';
 import type { FeatureInventory } from '../tables/load-feature-inventory.js';
+import { LineIndex } from '../model/line-index.js';
+import { ownCopy } from '../model/own-copy.js';
+import type { Point } from '../model/position.js';
 
 /** The 37 universal relations of UD v2 (../shared/CHECK-VALUES.md §6). */
 export const universalRelations: readonly string[] = [
@@ -11,6 +14,25 @@ export const universalRelations: readonly string[] = [
   'discourse', 'aux', 'cop', 'mark', 'nmod', 'appos', 'nummod', 'acl', 'amod', 'det', 'clf', 'case', 'conj', 'cc',
   'fixed', 'flat', 'list', 'parataxis', 'compound', 'orphan', 'goeswith', 'reparandum', 'punct', 'root', 'dep',
 ];
+
+/** Where a sentence's sent_id stands, in plain data (it may come from a worker thread): the point, and its line's text and start. */
+export interface SentIdAt {
+  id: string;
+  file: string;
+  start: Point;
+  line: string;
+  lineStart: Point;
+}
+
+/** Where a sentence's sent_id stands, when it has one (its comment, else the sentence's start). */
+export function sentIdOf(sentence: DependencySentence): SentIdAt | undefined {
+  if (sentence.id === undefined || !sentence.source) return undefined;
+  const comment = sentence.comments.find((c) => /^\s*sent_id\s*=/.test(c.text));
+  const offset = comment?.position?.start ?? sentence.position?.start ?? 0;
+  const start = sentence.source.pointAt(offset);
+  const line = sentence.source.lineAt(offset);
+  return { id: sentence.id, file: sentence.file ?? '-', start, line: line.text, lineStart: { offset: offset - (start.column - 1), line: start.line, column: 1 } };
+}
 
 /** Totals of a CoNLL-U validation run. */
 export interface ConlluSummary {
@@ -53,9 +75,17 @@ export class ConlluValidator {
   }
 
   check(sentence: DependencySentence): void {
-    this.summary.sentences++;
+    this.count(this.checkWithin(sentence));
+    this.checkSentId(sentIdOf(sentence));
+  }
+
+  /**
+   * The checks of one sentence on its own (tree, columns, relations), which
+   * need nothing of the others, so that worker threads can run them; gives its
+   * number of words. {@link count} and {@link checkSentId} do the rest in order.
+   */
+  checkWithin(sentence: DependencySentence): number {
     const words = sentence.lines.filter((line): line is DependencyWord => line.type === 'word');
-    this.summary.words += words.length;
     checkDependencyTree(sentence, this.report);
     checkWordColumns(sentence, this.report, this.features);
     for (const word of words) {
@@ -65,21 +95,26 @@ export class ConlluValidator {
       if (this.relations.has(universal)) continue;
       this.warnAt(sentence, word, 7, `relation "${word.deprel}" is not in the declared set`);
     }
-    this.checkSentId(sentence);
+    return words.length;
   }
 
-  private checkSentId(sentence: DependencySentence): void {
-    if (sentence.id === undefined || !sentence.source) return;
-    const comment = sentence.comments.find((c) => /^\s*sent_id\s*=/.test(c.text));
-    const offset = comment?.position?.start ?? sentence.position?.start ?? 0;
-    const here = sentence.source.pointAt(offset);
-    const first = this.sentIds.get(sentence.id);
+  /** Counts a sentence of so many words. */
+  count(words: number): void {
+    this.summary.sentences++;
+    this.summary.words += words;
+  }
+
+  /** Reports a sent_id used before (across sentences and files, in input order). */
+  checkSentId(at: SentIdAt | undefined): void {
+    if (!at) return;
+    const first = this.sentIds.get(at.id);
     if (first === undefined) {
-      this.sentIds.set(sentence.id, `${sentence.file ?? '-'}:${here.line}:${here.column}`);
+      // A copy of the id: the id read is a slice of a stretch of the input, which a kept slice would keep whole.
+      this.sentIds.set(ownCopy(at.id), `${at.file}:${at.start.line}:${at.start.column}`);
       return;
     }
-    const where = { file: sentence.file ?? '-', offset, lines: sentence.source };
-    this.report(diagnose('duplicate-sent-id', `sent_id "${sentence.id}" was already used`, where, [`first used at ${first}`]));
+    const where = { file: at.file, offset: at.start.offset, lines: new LineIndex(at.line, at.lineStart) };
+    this.report(diagnose('duplicate-sent-id', `sent_id "${at.id}" was already used`, where, [`first used at ${first}`]));
   }
 
   private warnAt(sentence: DependencySentence, word: DependencyWord, field: number, message: string): void {
@@ -90,3 +125,4 @@ export class ConlluValidator {
     this.report(diagnose('unknown-relation', message, where));
   }
 }
+

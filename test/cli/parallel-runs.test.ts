@@ -72,3 +72,41 @@ describe('commands on worker threads', () => {
     }
   });
 });
+
+// CoNLL-U input: the gold of the demo data repeated past many stretches, with renumbered sent_ids,
+// a duplicate, a sentence that is not a tree, crossing arcs, a second file without a final blank line.
+function largeConllu(folder: string): string[] {
+  const gold = demo('harbour-gold.conllu');
+  const crossing = demo('crossing.conllu');
+  const bad = demo('bad.conllu');
+  const parts: string[] = [];
+  for (let k = 0; k < 150; k++) parts.push(gold.replace(/sent_id = (\S+)/g, `sent_id = $1.${k}`), crossing.replace(/sent_id = (\S+)/g, `sent_id = $1.${k}`), k % 9 === 4 ? bad + '\n' : '');
+  parts.push(gold);
+  const first = join(folder, 'first.conllu');
+  const second = join(folder, 'second.conllu');
+  writeFileSync(first, parts.join(''));
+  writeFileSync(second, gold.replace(/sent_id = (\S+)/g, 'sent_id = $1.again') + crossing.trimEnd() + '\n');
+  return [first, second];
+}
+
+describe('CoNLL-U commands on worker threads', () => {
+  it.each([
+    ['validate', ['--source']],
+    ['validate', ['--json']],
+    ['stats', ['--arcs']],
+    ['to-brackets', ['--lifts', '--shape', 'layered']],
+  ])('%s %j writes what --jobs 1 writes, problems and closing line included', { timeout: 120_000 }, async (command, extra) => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const files = largeConllu(folder);
+    expect(readFileSync(files[0]!, 'utf8').length).toBeGreaterThan(300_000);
+    const args = [command, ...extra, ...(command === 'validate' ? [] : ['--verbose']), ...files];
+    const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+    const three = await runBin([...args, '--jobs', '3'], { limitMs: 100_000 });
+    expect(one.code).toBe(1);
+    expect(one.stdout.length + one.stderr.length).toBeGreaterThan(1_000);
+    if (command === 'validate' && extra[0] === '--source') expect(one.stdout).toContain('[duplicate-sent-id]');
+    expect(three.code).toBe(one.code);
+    expect(three.stderr).toBe(one.stderr);
+    expect(three.stdout === one.stdout).toBe(true);
+  });
+});

@@ -1,7 +1,7 @@
 // --jobs N writes what --jobs 1 writes, byte for byte, problems and closing line included, on all
-// shared bracketed corpora: IcePaHC (CC BY 4.0) and GUM constituency trees (CC BY 4.0). The
-// commands with worker threads are to-deps, rewrite and stats of constituency trees; the others run
-// on one thread.
+// shared corpora: IcePaHC (CC BY 4.0) and GUM constituency trees (CC BY 4.0) for to-deps, rewrite
+// and stats of constituency trees; the UD version of IcePaHC (CC BY-SA 4.0) and GUM's dependencies
+// for validate, stats and to-brackets of CoNLL-U.
 import { describe, expect, it } from 'vitest';
 import { runBin } from '../support/bin.js';
 import { corpusFiles } from '../support/corpora.js';
@@ -25,6 +25,33 @@ describe('worker threads on the shared corpora', () => {
         const one = await runBin([...args, '--jobs', '1'], { limitMs: 300_000 });
         const three = await runBin([...args, '--jobs', '3'], { limitMs: 300_000 });
         expect(one.stdout.length).toBeGreaterThan(command === 'stats' ? 1_000 : 1_000_000);
+        expect(three.code).toBe(one.code);
+        expect(three.stderr).toBe(one.stderr);
+        expect(three.stdout === one.stdout).toBe(true);
+      });
+    }
+  }
+});
+
+const dependencyCorpora = [
+  ['IcePaHC UD', () => corpusFiles('icepahc-ud', '.conllu')],
+  ['GUM dependencies', () => corpusFiles('gum/dep', '.conllu')],
+] as const;
+
+const dependencyCommands = [
+  ['validate', ['--source']],
+  ['stats', ['--arcs', '--verbose']],
+  ['to-brackets', ['--lifts', '--verbose']],
+] as const;
+
+describe('worker threads on the shared CoNLL-U', () => {
+  for (const [name, files] of dependencyCorpora) {
+    for (const [command, options] of dependencyCommands) {
+      it(`${command} of ${name}: --jobs 3 gives the bytes of --jobs 1`, async () => {
+        const args = [command, ...options, ...files()];
+        const one = await runBin([...args, '--jobs', '1'], { limitMs: 300_000 });
+        const three = await runBin([...args, '--jobs', '3'], { limitMs: 300_000 });
+        expect(one.stdout.length + one.stderr.length).toBeGreaterThan(1_000);
         expect(three.code).toBe(one.code);
         expect(three.stderr).toBe(one.stderr);
         expect(three.stdout === one.stdout).toBe(true);

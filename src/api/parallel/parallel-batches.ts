@@ -75,7 +75,7 @@ export class ParallelBatches {
     const submit = () => {
       if (events.length === 0) return;
       const task = { work: this.work, read: { ...this.read, file }, batches };
-      const result = batches.length === 0 ? undefined : this.submitted++ % this.jobs === 0 ? Promise.resolve(run(task)) : this.workers().run(task);
+      const result = batches.length === 0 ? undefined : this.submitted++ % this.jobs === 0 ? Promise.resolve(run(task) as TaskResult) : this.workers().run(task);
       this.queue.push({ events, result });
       events = [];
       batches = [];

@@ -3,6 +3,7 @@ import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
 import type { Task, TaskResult } from './tasks.js';
+import type { StretchEvent, StretchTask } from './sentence-work.js';
 
 /** The number of jobs a run uses when none is asked for: TREEBRIDGE_JOBS when set to a whole number, else one per core. */
 export function defaultJobs(): number {
@@ -39,8 +40,10 @@ export class WorkerPool {
     });
   }
 
-  run(task: Task): Promise<TaskResult> {
-    return this.pool.run(task) as Promise<TaskResult>;
+  run(task: Task): Promise<TaskResult>;
+  run(task: StretchTask): Promise<StretchEvent[]>;
+  run(task: Task | StretchTask): Promise<TaskResult | StretchEvent[]> {
+    return this.pool.run(task) as Promise<TaskResult | StretchEvent[]>;
   }
 
   async close(): Promise<void> {

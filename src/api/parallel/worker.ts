@@ -10,6 +10,7 @@ import { emptyConversionTally, TreeConverter } from '../convert.js';
 import { resolveConversionOptions, type ResolvedConversion } from '../options.js';
 import { emptyRewriteTally, TreeRewriter } from '../rewrite.js';
 import type { Task, TaskResult, Work } from './tasks.js';
+import { SentenceWorker, type StretchEvent, type StretchTask } from './sentence-work.js';
 
 /** Tables are loaded once per worker and options: a run sends the same names with every task. */
 const resolved = new Map<string, ResolvedConversion>();
@@ -41,8 +42,24 @@ function workerFor(work: Work, report: (diagnostic: Diagnostic) => void): Worker
   return { write: (tree) => converter.convertToText(tree), tally: converter.tally };
 }
 
+/** Sentence workers, one per kind of work and settings (tables loaded once per thread). */
+const sentenceWorkers = new Map<string, SentenceWorker>();
+
+/** A stretch of CoNLL-U read and worked on (see sentence-work.ts). */
+function runStretch(task: StretchTask): StretchEvent[] {
+  const key = JSON.stringify(task.work);
+  let worker = sentenceWorkers.get(key);
+  if (!worker) sentenceWorkers.set(key, (worker = new SentenceWorker(task.work)));
+  return worker.stretch(task);
+}
+
 /** The entry point the pool calls with each task; the main thread calls it too, for its share. */
-export default function run(task: Task): TaskResult {
+export default function run(task: Task | StretchTask): TaskResult | StretchEvent[] {
+  if ('kind' in task && task.kind === 'stretch') return runStretch(task);
+  return runBatches(task as Task);
+}
+
+function runBatches(task: Task): TaskResult {
   let sink: Diagnostic[] = [];
   const report = (diagnostic: Diagnostic) => sink.push(diagnostic);
   const worker = workerFor(task.work, report);

@@ -7,7 +7,9 @@ import { itemName } from '../../diagnostics/diagnostic.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
-import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { readTreesOf } from '../read-trees.js';
+import { sentenceEvents } from '../sentence-events.js';
+import { CorpusStructureCounter } from '../../analysis/corpus-structure.js';
 import { addBracketedReadOptions, bracketedReadOptions, conversionOptionNames, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { addConversionOptions, conversionOptionsOf, resolveConversion } from '../conversion-options.js';
 import { addListingOptions, closingLine, listingOf, ProblemPrinter } from '../print-problems.js';
@@ -51,27 +53,50 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   let read = 0;
   let analysis;
   try {
+    if (conversion === undefined) {
+      // CoNLL-U: sentences read and measured on worker threads, figures summed here in input order.
+      const counter = new CorpusStructureCounter();
+      let notTrees = 0;
+      for await (const event of sentenceEvents(inputs, { kind: 'structure' }, jobsOf(options), io)) {
+        if (event.kind === 'problem') {
+          problems.report(event.diagnostic);
+          continue;
+        }
+        read++;
+        const { structure, name } = event.result;
+        for (const diagnostic of event.result.problems) problems.report(diagnostic);
+        if (!structure) {
+          notTrees++;
+          continue;
+        }
+        counter.add(structure);
+        if (options.arcs !== true || options.json === true || structure.nonProjectiveArcs.length === 0) continue;
+        const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
+        await output.write(`${name}: ${arcs.join(', ')}\n`);
+      }
+      analysis = { figures: counter.result(), notTrees };
+    }
     // Dependency sentences of the inputs: read as CoNLL-U, or converted from constituency trees first.
     // With several jobs, constituency trees are converted on worker threads, as to-deps does, and their CoNLL-U read back.
     const jobs = jobsOf(options);
     const sentences =
       conversion === undefined
-        ? readSentencesOf(inputs, problems.report, io)
+        ? undefined
         : jobs > 1
           ? readConllu(convertedText(inputs, options, conversion, {}, jobs, problems.report, tally, io), { file: 'converted' }, problems.report)
           : convertTrees(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io), { ...conversionOptionsOf(options), heads: conversion.settings.heads, labels: conversion.settings.labels, posMap: conversion.settings.upos, lossless: false }, problems.report, tally);
     const counted = async function* () {
-      for await (const sentence of sentences) {
+      for await (const sentence of sentences!) {
         read++;
         yield sentence;
       }
     };
-    analysis = await analyseStructure(counted(), problems.report, async (sentence, structure) => {
+    if (sentences) analysis = await analyseStructure(counted(), problems.report, async (sentence, structure) => {
       if (options.arcs !== true || options.json === true || structure.nonProjectiveArcs.length === 0) return;
       const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
       await output.write(`${itemName(sentence, read)}: ${arcs.join(', ')}\n`);
     });
-    const result = analysis.figures;
+    const result = analysis!.figures;
     await output.write(options.json === true ? JSON.stringify(result, null, 2) + '\n' : (options.arcs === true ? '\n' : '') + formatCorpusStructure(result));
     await output.commit();
   } catch (error) {
@@ -80,7 +105,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   }
   problems.printSummary();
   const unit = format === 'conllu' ? 'sentence' : 'tree';
-  const outcomes: Array<[number, string]> = [[read - analysis.notTrees, 'measured'], [analysis.notTrees, 'left out (not trees)']];
+  const outcomes: Array<[number, string]> = [[read - analysis!.notTrees, 'measured'], [analysis!.notTrees, 'left out (not trees)']];
   if (tally.skipped > 0) outcomes.push([tally.skipped, 'without words skipped']);
   io.stderr.write(closingLine(read + tally.skipped, unit, outcomes, [], problems));
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };

@@ -1,5 +1,7 @@
 import { Option, type Command } from 'commander';
-import { emptyBracketTally, resolveBracketOptions, toBrackets as toBracketsOf, type BracketOptions } from '../../api/brackets.js';
+import { emptyBracketTally, resolveBracketOptions, toBrackets as toBracketsOf, type BracketOptions, type BracketTally } from '../../api/brackets.js';
+import { addJobsOption, jobsOf } from '../jobs-option.js';
+import { sentenceEvents } from '../sentence-events.js';
 import { OptionsError } from '../../api/options.js';
 import { itemName } from '../../diagnostics/diagnostic.js';
 import type { Layout } from '../../formats/bracketed/write-bracketed.js';
@@ -27,6 +29,7 @@ export function registerToBrackets(program: Command, io: CliIO, done: (result: C
     .option('--lossless', 'rebuild the bracketing carried by to-deps --lossless exactly, where a sentence carries one')
     .option('-o, --output <file>', 'write the bracketed trees to a file (default: standard output)');
   addListingOptions(command);
+  addJobsOption(command);
   command.action(async (files: string[], options: Record<string, unknown>) => done(await toBrackets(files, options, io)));
 }
 
@@ -56,7 +59,26 @@ async function toBrackets(files: string[], options: Record<string, unknown>, io:
   const tally = emptyBracketTally();
   let written = 0;
   try {
-    for await (const rebuilt of toBracketsOf(readSentencesOf(inputs, report, io), { ...bracketOptions, categories: settings.categories }, report, tally)) {
+    if (!bracketOptions.discontinuous) {
+      // Bracketings: sentences rebuilt and written on worker threads, in input order.
+      const work = { kind: 'brackets' as const, categories: options.categories as string, shape: bracketOptions.shape!, pos: bracketOptions.pos!, lossless: bracketOptions.lossless!, layout: options.layout as Layout };
+      for await (const event of sentenceEvents(inputs, work, jobsOf(options), io)) {
+        if (event.kind === 'problem') {
+          report(event.diagnostic);
+          continue;
+        }
+        const result = event.result;
+        const at = result.liftsAt ?? result.problems.length;
+        for (const diagnostic of result.problems.slice(0, at)) report(diagnostic);
+        if (result.lifts && options.lifts === true) io.stderr.write(`${result.name}: lifted ${result.lifts}\n`);
+        for (const diagnostic of result.problems.slice(at)) report(diagnostic);
+        if (result.text) await sink.writeText(result.text);
+        written += result.written ?? 0;
+        for (const key of Object.keys(tally) as Array<keyof BracketTally>) tally[key] += result.tally?.[key] ?? 0;
+      }
+    }
+    // XML graphs number their sentences as they are written: on one thread.
+    if (bracketOptions.discontinuous) for await (const rebuilt of toBracketsOf(readSentencesOf(inputs, report, io), { ...bracketOptions, categories: settings.categories }, report, tally)) {
       if (rebuilt.sentence && rebuilt.lifts.length > 0 && options.lifts === true) {
         const arcs = rebuilt.lifts.map((l) => `${l.dependent}: ${l.from}→${l.to}`).join(', ');
         io.stderr.write(`${itemName(rebuilt.sentence, tally.read)}: lifted ${arcs}\n`);

@@ -8,11 +8,13 @@ import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadi
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { checkInputs, describeError, openInputs, Output, type CliIO } from '../io.js';
-import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { readTreesOf } from '../read-trees.js';
 import { plural, tableErrorLines } from '../print-problems.js';
 import { loadFeatureInventory, type FeatureInventory } from '../../tables/load-feature-inventory.js';
 import { TableError } from '../../tables/table-source.js';
 import { resolve } from 'node:path';
+import { addJobsOption, jobsOf } from '../jobs-option.js';
+import { sentenceEvents } from '../sentence-events.js';
 
 export function registerValidate(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
   const command = program
@@ -25,6 +27,7 @@ export function registerValidate(program: Command, io: CliIO, done: (result: Com
     .option('--relations <labels>', 'CoNLL-U: the relation set, comma-separated or a file with one per line (default: the 37 universal relations)')
     .option('--features <file>', "CoNLL-U: a file declaring a treebank's own features and values (one feature per line, its name then its values), added to the universal ones; repeat it for several", (value: string, previous: string[]) => [...previous, value], [])
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
+  addJobsOption(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => {
     done(await validate(files, options, io, self));
   });
@@ -56,10 +59,11 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
     relations = declared;
   }
   let features: FeatureInventory | undefined;
+  const featureFiles = (options.features as string[]).map((file) => resolve(io.cwd ?? process.cwd(), file));
   if (format === 'conllu') {
     try {
       features = loadFeatureInventory('ud');
-      for (const file of options.features as string[]) loadFeatureInventory(io.cwd ? resolve(io.cwd, file) : file, features);
+      for (const file of featureFiles) loadFeatureInventory(file, features);
     } catch (error) {
       if (!(error instanceof TableError)) throw error;
       return { code: ExitCode.UsageOrIO, messages: tableErrorLines(error) };
@@ -112,9 +116,18 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   try {
     if (format === 'conllu') {
       const validator = new ConlluValidator(collect, relations, features);
-      for await (const sentence of readSentencesOf(inputs, validator.report, io, nextInput(() => validator.startFile()))) {
-        await drain(sentence.position?.start ?? 0);
-        validator.check(sentence);
+      // Sentences are checked on their own on worker threads; counts and sent_ids across them here, in order.
+      const work = { kind: 'validate' as const, ...(relations ? { relations } : {}), features: featureFiles };
+      for await (const event of sentenceEvents(inputs, work, jobsOf(options), io, nextInput(() => validator.startFile()))) {
+        if (event.kind === 'problem') {
+          validator.report(event.diagnostic);
+          continue;
+        }
+        const result = event.result;
+        await drain(result.start);
+        for (const diagnostic of result.problems) validator.report(diagnostic);
+        validator.count(result.words ?? 0);
+        validator.checkSentId(result.sentId);
       }
       run = validator;
     } else {

@@ -7,6 +7,9 @@ import { decodeStream, PIECE_SIZE } from '../bracketed/read-bracketed.js';
 import type { SourceLine } from './conllu-line.js';
 import { buildSentence } from './build-sentence.js';
 import { MAX_TREE_LENGTH } from '../../model/limits.js';
+import { SentenceCutter, type ConlluStart } from './sentence-cutter.js';
+
+export type { ConlluStart } from './sentence-cutter.js';
 
 /** How the CoNLL-U reader reports and names things. */
 export interface ConlluReadOptions {
@@ -27,12 +30,61 @@ export async function* readConllu(
   report: Report,
 ): AsyncGenerator<DependencySentence> {
   const reader = new LineReader(options.file ?? '-', report);
+  // The text is read in stretches that end at sentence boundaries (SentenceCutter), whatever
+  // pieces it arrives in: problems and sentences come in the same order when the stretches are
+  // read on several threads.
+  const cutter = new SentenceCutter();
   for await (const piece of pieces) {
-    reader.push(piece);
-    yield* reader.take();
+    for (const chunk of cutter.push(piece)) {
+      reader.push(chunk.text);
+      yield* reader.take();
+    }
   }
+  const last = cutter.end();
+  if (last.text !== '') reader.push(last.text);
   reader.end();
   yield* reader.take();
+}
+
+/** A reader of stretches of one file from a point on, for text that cannot be cut at sentence boundaries. */
+export interface ConlluReader {
+  /** The sentences a stretch completes (problems reported before them). */
+  push(text: string): DependencySentence[];
+  /** The sentences the file's end completes. */
+  end(): DependencySentence[];
+}
+
+/** Opens a reader at a point of a file (a sentence boundary). */
+export function openConlluReader(file: string, report: Report, start: ConlluStart): ConlluReader {
+  const reader = new LineReader(file, report, start);
+  return {
+    push(text) {
+      if (text !== '') reader.push(text);
+      return reader.take();
+    },
+    end() {
+      reader.end();
+      return reader.take();
+    },
+  };
+}
+
+
+/**
+ * Reads one stretch of a CoNLL-U file that starts at a sentence boundary
+ * (after a blank line, or the file's start), as the reader of the whole file
+ * reads it there: the same sentences, positions and problems, in the same
+ * order. `last`: the stretch ends the file. `each` hears the sentences the
+ * stretch's text completes, then those its end completes, each after the
+ * problems reported before it.
+ */
+export function readConlluStretch(text: string, start: ConlluStart, last: boolean, file: string, report: Report, each: (sentence: DependencySentence) => void): void {
+  const reader = new LineReader(file, report, start);
+  if (text !== '') reader.push(text);
+  for (const sentence of reader.take()) each(sentence);
+  if (!last) return;
+  reader.end();
+  for (const sentence of reader.take()) each(sentence);
 }
 
 /** Reads a CoNLL-U file as a stream of sentences. */
@@ -68,7 +120,16 @@ class LineReader {
   constructor(
     private readonly file: string,
     private readonly report: Report,
-  ) {}
+    start?: ConlluStart,
+  ) {
+    if (start && !start.first) {
+      this.first = false;
+      this.offset = start.offset;
+      this.line = start.line;
+      // A stretch after the first starts after a blank line.
+      this.afterBlank = true;
+    }
+  }
 
   push(piece: string): void {
     if (this.first) {

@@ -1,0 +1,77 @@
+import { openConlluReader, type ConlluReader } from '../../formats/conllu/read-conllu.js';
+import { SentenceCutter, type Stretch } from '../../formats/conllu/sentence-cutter.js';
+import { WorkerPool } from './pool.js';
+import { SentenceWorker, type SentenceWork, type StretchEvent, type StretchTask } from './sentence-work.js';
+
+/**
+ * Does work on the sentences of CoNLL-U input (checking, measuring, rebuilding
+ * as bracketings) on worker threads, giving the events that doing it on one
+ * thread gives, in the same order. The main thread cuts the text into
+ * stretches at sentence boundaries (SentenceCutter); each stretch is read and
+ * worked on whole, by a worker or, every jobs-th one, by the main thread, and
+ * the events come back in input order. At most a few stretches per job are in
+ * flight, so memory does not grow with the input. Where no sentence boundary
+ * comes for longer than a sentence may be, the rest of that file is read here.
+ */
+export class ParallelSentences {
+  private pool: WorkerPool | undefined;
+  private readonly local: SentenceWorker;
+  private readonly queue: Array<Promise<StretchEvent[]> | StretchEvent[]> = [];
+  private readonly jobs: number;
+  private readonly inFlight: number;
+  private submitted = 0;
+
+  constructor(
+    jobs: number,
+    private readonly work: SentenceWork,
+  ) {
+    this.jobs = WorkerPool.available ? jobs : 1;
+    this.inFlight = jobs * 3;
+    this.local = new SentenceWorker(work);
+  }
+
+  /** The events of one file given in pieces, in order; they may lag behind the input until {@link drain}. */
+  async *run(pieces: AsyncIterable<string>, file: string): AsyncGenerator<StretchEvent> {
+    const cutter = new SentenceCutter();
+    let reader: ConlluReader | undefined;
+    /** Where the reader's problems go: the events of the stretch it is reading. */
+    let current: StretchEvent[] = [];
+    const take = (stretch: Stretch, last: boolean) => {
+      if (!reader && stretch.clean && (stretch.endsClean || last)) return this.submit({ kind: 'stretch', work: this.work, file, text: stretch.text, start: stretch.start, last });
+      // A stretch that ends inside a sentence, and every one after it in the file, is read by one reader, here.
+      const events: StretchEvent[] = (current = []);
+      reader ??= openConlluReader(file, (diagnostic) => current.push({ kind: 'problem', diagnostic }), stretch.start);
+      const heard = (sentences: ReturnType<ConlluReader['push']>) => {
+        for (const sentence of sentences) events.push({ kind: 'sentence', result: this.local.sentence(sentence) });
+      };
+      heard(reader.push(stretch.text));
+      if (last) heard(reader.end());
+      this.queue.push(events);
+    };
+    for await (const piece of pieces) {
+      for (const stretch of cutter.push(piece)) {
+        take(stretch, false);
+        while (this.queue.length > this.inFlight) yield* await this.queue.shift()!;
+      }
+    }
+    take(cutter.end(), true);
+    while (this.queue.length > this.inFlight) yield* await this.queue.shift()!;
+  }
+
+  /** The events of every stretch still in flight, in order. */
+  async *drain(): AsyncGenerator<StretchEvent> {
+    while (this.queue.length > 0) yield* await this.queue.shift()!;
+  }
+
+  async close(): Promise<void> {
+    await this.pool?.close();
+  }
+
+  private submit(task: StretchTask): void {
+    if (this.submitted++ % this.jobs === 0) this.queue.push(this.local.stretch(task));
+    else {
+      this.pool ??= new WorkerPool(this.jobs - 1);
+      this.queue.push(this.pool.run(task) as unknown as Promise<StretchEvent[]>);
+    }
+  }
+}
