@@ -13,8 +13,11 @@ export type PunctuationPolicy = 'phrase' | 'root';
 function raiseSubjects(root: ConversionNode, attachments: Attachment[], rule: NonNullable<HeadTable['raising']>): void {
   // Lowest clauses first, as a raised subject may raise again from the phrase above.
   for (const phrase of phrasesBottomUp(root)) {
-    for (const child of phrase.children) {
+    const conjuncts = phrase.coordination?.conjuncts ?? [];
+    for (const [k, child] of phrase.children.entries()) {
       if (child.kind !== 'phrase') continue;
+      // A later conjunct hangs from the first, not from the phrase's head: its subject has nowhere to rise to without crossing.
+      if (conjuncts.includes(k) && k !== conjuncts[0]) continue;
       const subjectIndex = raisedSubject(phrase, child, rule);
       if (subjectIndex === -1 || subjectIndex === child.head?.child) continue;
       const subject = child.children[subjectIndex]!;

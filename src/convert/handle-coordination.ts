@@ -99,12 +99,20 @@ export function coordinationAttachments(
   const inside = (i: number) => i >= coordination.conjuncts[0]! && i <= coordination.conjuncts[coordination.conjuncts.length - 1]!;
   const head = groupHead;
   const { conjuncts, coordinators, separators } = coordination;
-  // A coordinator or separator hangs from the conjunct after it, as do the words between a coordinator
-  // and that conjunct ("but rather the legitimacy …"); without a conjunct after it, from the head.
-  const nextConjunct = (i: number) => conjuncts.find((k) => k > i) ?? head;
-  /** Children between a coordinator and the conjunct after it. */
+  /** Children between a coordinator and the conjunct after it ("but rather the legitimacy …"): they hang from that conjunct. */
   const leading = new Set<number>();
-  for (const c of coordinators) for (let i = c + 1; i < nextConjunct(c); i++) leading.add(i);
+  for (const c of coordinators) {
+    const after = conjuncts.find((k) => k > c);
+    if (after !== undefined) for (let i = c + 1; i < after; i++) leading.add(i);
+  }
+  // A coordinator or separator hangs from the conjunct after it when only such children stand between
+  // (so that no arc crosses a dependent of the head); else from the head.
+  const between = (i: number) => separators.includes(i) || coordinators.includes(i) || leading.has(i);
+  const nextConjunct = (i: number) => {
+    let next = i + 1;
+    while (next < childCount && between(next) && !conjuncts.includes(next)) next++;
+    return conjuncts.includes(next) ? next : head;
+  };
   return Array.from({ length: childCount }, (_, i) => {
     const role = conjuncts.includes(i) ? 'conjunct' : coordinators.includes(i) ? 'coordinator' : 'other';
     if (phraseHead !== groupHead) {

@@ -214,3 +214,29 @@ describe('en-content: names, auxiliaries and raised subjects', () => {
     expect(arcs(made, 'en-content', { labelTable: 'en-ud' })).toContain('ferry→made/obj');
   });
 });
+
+// With traces kept, every phrase attaches where it stands: no arc may cross (projectivity, the
+// definition of Nivre & Nilsson 2005 via CHECK-VALUES).
+describe('coordination and raising never cross arcs with traces kept', () => {
+  const crossing = async (text: string) => {
+    const { readBracketedText } = await import('../../src/formats/bracketed/read-bracketed.js');
+    const { loadLabelTable } = await import('../../src/tables/load-table.js');
+    const result = convertTree(readBracketedText(text, {}, () => undefined)[0]!, { ...settings('keep'), labels: loadLabelTable('en-ud') }, 'x', 'x')!;
+    return analyseTree(headVector(result.sentence)!).nonProjectiveArcs.length;
+  };
+
+  it('hangs a coordinator from the head when a dependent of the head stands between it and the next conjunct', async () => {
+    // "but" is followed by a clause only after "then" (a late conjunct): nothing between may hang from the head.
+    const text = '(S (NP-SBJ (DT The) (NN ferry)) (VP (VBD waited)) (, ,) (ADVP (RB still)) (CC but) (ADVP (RB then)) (S (NP-SBJ (DT the) (NN fog)) (VP (VBD lifted))))';
+    expect(await crossing(text)).toBe(0);
+    expect(await crossing('(NP (NP (NNS nets)) (, ,) (ADVP (RB also)) (CC and) (NP (NNS ropes)))')).toBe(0);
+  });
+
+  it('raises the subject of a first clause conjunct only, not of the later ones', async () => {
+    const text = '(S (NP-SBJ (NNP Mira)) (VP (VB made) (S (NP-SBJ (DT the) (NN ferry)) (VP (VB wait))) (CC and) (S (NP-SBJ (DT the) (NN crew)) (VP (VB row)))))';
+    expect(await crossing(text)).toBe(0);
+    const out = arcs(text, 'en-content', { labelTable: 'en-ud' });
+    expect(out).toContain('ferry→made/obj');
+    expect(out).toContain('crew→row/nsubj');
+  });
+});

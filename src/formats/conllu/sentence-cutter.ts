@@ -10,7 +10,7 @@ export interface ConlluStart {
 }
 
 /** Characters of CoNLL-U per stretch, about: enough that handing a stretch to a thread costs little beside reading it. */
-export const STRETCH_SIZE = 64 * 1024;
+export const STRETCH_SIZE = 16 * 1024;
 
 /** A stretch of CoNLL-U text, where it starts, and whether it starts at a sentence boundary. */
 export interface Stretch {
