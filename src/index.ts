@@ -56,7 +56,7 @@ export type { FixedExpressions, HeadBlock, HeadStep, HeadTable, LabelCondition, 
 export type { Candidate, Matcher } from './tables/label-pattern.js';
 export { compileHeadTable, compileLabelTable, loadHeadTable, loadLabelTable } from './tables/load-table.js';
 export { formatFeatures, loadPosMap, PosMap, universalTags } from './tables/load-pos-map.js';
-export type { ContextRule, WordClass, WordContext } from './tables/load-pos-map.js';
+export type { ContextRule, WordClass, WordContext, WrittenClass } from './tables/load-pos-map.js';
 export type { CategoryContext, CategoryTable } from './tables/load-category-table.js';
 export { loadCategoryTable } from './tables/load-category-table.js';
 export type { FeatureInventory } from './tables/load-feature-inventory.js';
@@ -83,8 +83,8 @@ export type { Lift } from './reverse/lift-nonprojective-arcs.js';
 export { liftNonProjectiveArcs as liftNonProjective } from './reverse/lift-nonprojective-arcs.js';
 
 // Checking whole files and streams.
-export type { ConlluSummary } from './validate/validate-conllu.js';
-export { ConlluValidator, universalRelations } from './validate/validate-conllu.js';
+export type { ConlluSummary, SentIdAt } from './validate/validate-conllu.js';
+export { ConlluValidator, sentIdOf, universalRelations } from './validate/validate-conllu.js';
 export type { ValidationSummary } from './validate/validate-bracketed.js';
 export { BracketedValidator } from './validate/validate-bracketed.js';
 

@@ -69,6 +69,7 @@ describe('the public interface', () => {
       'resolveTraces',
       'roundTrip',
       'scoreHeads',
+      'sentIdOf',
       'shippedTables',
       'suggestHeads',
       'suggestLabels',
