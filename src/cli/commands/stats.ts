@@ -1,7 +1,8 @@
 import { Option, type Command } from 'commander';
 import { convertTrees, emptyConversionTally } from '../../api/convert.js';
 import type { ResolvedConversion } from '../../api/options.js';
-import { analyseStructure } from '../../api/structure.js';
+import { analyseStructure, type StructureAnalysis } from '../../api/structure.js';
+import type { TreeStructure } from '../../analysis/structure.js';
 import { formatCorpusStructure } from '../../analysis/format-structure.js';
 import { itemName } from '../../diagnostics/diagnostic.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
@@ -51,8 +52,13 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   const problems = new ProblemPrinter(io, listingOf(options));
   const tally = emptyConversionTally();
   let read = 0;
-  let analysis;
+  let analysis: StructureAnalysis;
   try {
+    const listArcs = async (name: string, structure: TreeStructure) => {
+      if (options.arcs !== true || options.json === true || structure.nonProjectiveArcs.length === 0) return;
+      const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
+      await output.write(`${name}: ${arcs.join(', ')}\n`);
+    };
     if (conversion === undefined) {
       // CoNLL-U: sentences read and measured on worker threads, figures summed here in input order.
       const counter = new CorpusStructureCounter();
@@ -70,33 +76,26 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
           continue;
         }
         counter.add(structure);
-        if (options.arcs !== true || options.json === true || structure.nonProjectiveArcs.length === 0) continue;
-        const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
-        await output.write(`${name}: ${arcs.join(', ')}\n`);
+        await listArcs(name, structure);
       }
       analysis = { figures: counter.result(), notTrees };
-    }
-    // Dependency sentences of the inputs: read as CoNLL-U, or converted from constituency trees first.
-    // With several jobs, constituency trees are converted on worker threads, as to-deps does, and their CoNLL-U read back.
-    const jobs = jobsOf(options);
-    const sentences =
-      conversion === undefined
-        ? undefined
-        : jobs > 1
+    } else {
+      // Constituency trees, converted first. With several jobs they are converted on worker threads, as
+      // to-deps does, and their CoNLL-U read back.
+      const jobs = jobsOf(options);
+      const sentences =
+        jobs > 1
           ? readConllu(convertedText(inputs, options, conversion, {}, jobs, problems.report, tally, io), { file: 'converted' }, problems.report)
           : convertTrees(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io), { ...conversionOptionsOf(options), heads: conversion.settings.heads, labels: conversion.settings.labels, posMap: conversion.settings.upos, lossless: false }, problems.report, tally);
-    const counted = async function* () {
-      for await (const sentence of sentences!) {
-        read++;
-        yield sentence;
-      }
-    };
-    if (sentences) analysis = await analyseStructure(counted(), problems.report, async (sentence, structure) => {
-      if (options.arcs !== true || options.json === true || structure.nonProjectiveArcs.length === 0) return;
-      const arcs = structure.nonProjectiveArcs.map((arc) => `${arc.head}→${arc.dependent} (gap ${arc.gap.join(' ')})`);
-      await output.write(`${itemName(sentence, read)}: ${arcs.join(', ')}\n`);
-    });
-    const result = analysis!.figures;
+      const counted = async function* () {
+        for await (const sentence of sentences) {
+          read++;
+          yield sentence;
+        }
+      };
+      analysis = await analyseStructure(counted(), problems.report, (sentence, structure) => listArcs(itemName(sentence, read), structure));
+    }
+    const result = analysis.figures;
     await output.write(options.json === true ? JSON.stringify(result, null, 2) + '\n' : (options.arcs === true ? '\n' : '') + formatCorpusStructure(result));
     await output.commit();
   } catch (error) {
@@ -105,7 +104,7 @@ async function stats(files: string[], options: Record<string, unknown>, io: CliI
   }
   problems.printSummary();
   const unit = format === 'conllu' ? 'sentence' : 'tree';
-  const outcomes: Array<[number, string]> = [[read - analysis!.notTrees, 'measured'], [analysis!.notTrees, 'left out (not trees)']];
+  const outcomes: Array<[number, string]> = [[read - analysis.notTrees, 'measured'], [analysis.notTrees, 'left out (not trees)']];
   if (tally.skipped > 0) outcomes.push([tally.skipped, 'without words skipped']);
   io.stderr.write(closingLine(read + tally.skipped, unit, outcomes, [], problems));
   return { code: problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };

@@ -69,7 +69,6 @@ export function openConlluReader(file: string, report: Report, start: ConlluStar
   };
 }
 
-
 /**
  * Reads one stretch of a CoNLL-U file that starts at a sentence boundary
  * (after a blank line, or the file's start), as the reader of the whole file
@@ -79,12 +78,9 @@ export function openConlluReader(file: string, report: Report, start: ConlluStar
  * problems reported before it.
  */
 export function readConlluStretch(text: string, start: ConlluStart, last: boolean, file: string, report: Report, each: (sentence: DependencySentence) => void): void {
-  const reader = new LineReader(file, report, start);
-  if (text !== '') reader.push(text);
-  for (const sentence of reader.take()) each(sentence);
-  if (!last) return;
-  reader.end();
-  for (const sentence of reader.take()) each(sentence);
+  const reader = openConlluReader(file, report, start);
+  for (const sentence of reader.push(text)) each(sentence);
+  if (last) for (const sentence of reader.end()) each(sentence);
 }
 
 /** Reads a CoNLL-U file as a stream of sentences. */
