@@ -56,21 +56,9 @@ export async function roundTrip(
   const trip = checkOptions(roundTripSchema, { examples, samples, seed, countPunctuation });
   const leftOut: string[] = [];
   if ('trees' in items) {
-    const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'xpos' });
-    const resolved = resolveConversionOptions(checkOptions(conversionOptionsSchema, conversionInput));
-    const runner = new BracketRoundTrip(resolved.settings, bracketing, trip.examples, trip.samples, trip.countPunctuation, resolved.lossless, trip.seed);
+    const runner = bracketRoundTrip({ categories, shape, pos, ...conversionInput }, trip.examples, trip.samples, trip.countPunctuation, trip.seed);
     let number = 0;
-    for await (const tree of asAsync(items.trees)) {
-      number++;
-      const id = itemName(tree, number);
-      const wordless = runner.wordless;
-      // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces.
-      runner.add(tree.discontinuous ? insertTraces(tree).tree : tree, id);
-      if (runner.wordless > wordless) {
-        leftOut.push(id);
-        reportWordlessTree(tree, report);
-      }
-    }
+    for await (const tree of asAsync(items.trees)) tripTree(runner, tree, itemName(tree, ++number), leftOut, report);
     return { report: runner.report(), samples: runner.samples, leftOut };
   }
   const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'upos' });
@@ -87,6 +75,31 @@ export async function roundTrip(
     }
   }
   return { report: runner.report(), samples: runner.samples, leftOut };
+}
+
+/** The runner of round trips of trees, with the conversion and bracketing options resolved. */
+export function bracketRoundTrip(
+  options: Partial<ConversionOptions> & z.input<typeof bracketOptionsSchema>,
+  examples: number,
+  samples: number,
+  countPunctuation: boolean,
+  seed: number,
+): BracketRoundTrip {
+  const { categories, shape, pos, ...conversionInput } = options;
+  const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'xpos' });
+  const resolved = resolveConversionOptions(checkOptions(conversionOptionsSchema, conversionInput));
+  return new BracketRoundTrip(resolved.settings, bracketing, examples, samples, countPunctuation, resolved.lossless, seed);
+}
+
+/** Takes one tree there and back, as {@link roundTrip} does: a tree without words is reported and its id added to `leftOut`. */
+export function tripTree(runner: BracketRoundTrip, tree: Tree, id: string, leftOut: string[], report: Report): void {
+  const wordless = runner.wordless;
+  // A graph with discontinuous phrases is compared as its bracketing with *ICH* traces.
+  runner.add(tree.discontinuous ? insertTraces(tree).tree : tree, id);
+  if (runner.wordless > wordless) {
+    leftOut.push(id);
+    reportWordlessTree(tree, report);
+  }
 }
 
 /** What heads are scored with, besides the conversion options. */

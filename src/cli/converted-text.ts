@@ -11,7 +11,7 @@ import type { CliIO, Input } from './io.js';
 import { readInputs, readTreeBatchesOf } from './read-trees.js';
 
 /** The conversion options with tables as the user named them, for worker threads to load. */
-function namedConversion(options: Record<string, unknown>) {
+export function namedConversion(options: Record<string, unknown>) {
   const { heads, labels, posMap, traces, coordination, punctuation } = conversionOptionsOf(options);
   return { heads: heads as string, labels: labels as string | undefined, posMap: posMap as string | undefined, traces, coordination, punctuation };
 }

@@ -49,6 +49,19 @@ export interface DependencySample {
   changed: Set<number>;
 }
 
+/**
+ * A round trip's counts over some of the trees, as plain data: a worker
+ * thread takes a batch there and back and the main thread adds the parts up
+ * in input order ({@link BracketRoundTrip.merge}), which gives what one
+ * runner over all the trees gives.
+ */
+export interface TripPart {
+  totals: BracketTotals;
+  losses: Record<LossKind, number>;
+  examples: Record<LossKind, string[]>;
+  wordless: number;
+}
+
 /** Totals of a round trip over a corpus. */
 export interface RoundTripReport {
   direction: 'brackets' | 'dependencies';
@@ -269,6 +282,22 @@ export class BracketRoundTrip {
         else note('nesting');
       }
     }
+  }
+
+  /** The counts so far, as plain data (see TripPart). */
+  part(): TripPart {
+    return { totals: this.totals, losses: this.losses, examples: this.examples, wordless: this.wordless };
+  }
+
+  /** Adds the counts of the trees after those seen so far, as another runner took them there and back. */
+  merge(part: TripPart): void {
+    for (const key of Object.keys(this.totals) as Array<keyof BracketTotals>) this.totals[key] += part.totals[key];
+    for (const kind of lossKinds) {
+      this.losses[kind] += part.losses[kind];
+      // The first examples of the whole: the part's first ones carry on from ours, each id once.
+      for (const id of part.examples[kind]) if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
+    }
+    this.wordless += part.wordless;
   }
 
   report(): RoundTripReport {

@@ -1,7 +1,7 @@
 import type { Diagnostic, Report } from '../diagnostics/diagnostic.js';
 import type { Tree } from '../model/constituency.js';
 import { checkCoindexing } from './check-coindexing.js';
-import { SentenceIdCheck } from './check-sentence-ids.js';
+import { SentenceIdCheck, type TreeIdAt } from './check-sentence-ids.js';
 import { checkTreeShape } from './check-tree-shape.js';
 
 /** Totals of a validation run. */
@@ -44,9 +44,29 @@ export class BracketedValidator {
   }
 
   check(tree: Tree): void {
-    this.summary.trees++;
-    this.summary.words += checkTreeShape(tree, this.report);
-    checkCoindexing(tree, this.report);
+    this.count(this.checkWithin(tree));
     this.ids.check(tree);
+  }
+
+  /**
+   * The checks of one tree on its own (shape, coindexing), which need nothing
+   * of the others, so that worker threads can run them; gives its number of
+   * words. {@link count} and {@link checkId} do the rest, in input order.
+   */
+  checkWithin(tree: Tree): number {
+    const words = checkTreeShape(tree, this.report);
+    checkCoindexing(tree, this.report);
+    return words;
+  }
+
+  /** Counts a checked tree and its words. */
+  count(words: number): void {
+    this.summary.trees++;
+    this.summary.words += words;
+  }
+
+  /** The identifier checks across trees, from a tree's identifier data (see treeIdOf). */
+  checkId(at: TreeIdAt): void {
+    this.ids.checkAt(at);
   }
 }

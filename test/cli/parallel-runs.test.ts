@@ -56,6 +56,40 @@ describe('commands on worker threads', () => {
     expect(two.stdout === one.stdout).toBe(true);
   });
 
+  it('validates bracketed input as --jobs 1 does: problems sorted by place, duplicates across files, summary', { timeout: 120_000 }, async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const files = largeInput(folder);
+    const xml = join(projectRoot, 'demo-data', 'ferry-graphs.xml');
+    for (const extra of [['--source'], ['--json']]) {
+      const args = ['validate', '--lemmas', ...extra, files[0]!, xml, files[1]!];
+      const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+      const three = await runBin([...args, '--jobs', '3'], { limitMs: 100_000 });
+      expect(one.code).toBe(1);
+      // The repeated demo trees give duplicate identifiers, the unnamed ones missing identifiers.
+      expect(one.stdout).toContain('duplicate-id');
+      expect(one.stdout).toContain('missing-id');
+      expect(one.stdout).toContain('unclosed-bracket');
+      expect(three.code).toBe(one.code);
+      expect(three.stderr).toBe(one.stderr);
+      expect(three.stdout === one.stdout).toBe(true);
+    }
+  });
+
+  it('takes trees there and back as --jobs 1 does: scores, losses, examples and closing line', { timeout: 120_000 }, async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const files = largeInput(folder);
+    for (const extra of [['--json'], ['--lossless', '--examples', '3']]) {
+      const args = ['roundtrip', '--heads', 'en-content', '--labels', 'en-ud', '--lemmas', '--verbose', ...extra, ...files];
+      const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+      const two = await runBin([...args, '--jobs', '2'], { limitMs: 100_000 });
+      expect(one.code).toBe(1);
+      expect(one.stderr).toMatch(/round-tripped/);
+      expect(two.code).toBe(one.code);
+      expect(two.stderr).toBe(one.stderr);
+      expect(two.stdout).toBe(one.stdout);
+    }
+  });
+
   it('measures converted trees as --jobs 1 does: figures, listed arcs, problems and closing line', { timeout: 120_000 }, async () => {
     const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
     const files = largeInput(folder);

@@ -1,6 +1,6 @@
 // --jobs N writes what --jobs 1 writes, byte for byte, problems and closing line included, on all
-// shared corpora: IcePaHC (CC BY 4.0) and GUM constituency trees (CC BY 4.0) for to-deps, rewrite
-// and stats of constituency trees; the UD version of IcePaHC (CC BY-SA 4.0) and GUM's dependencies
+// shared corpora: IcePaHC (CC BY 4.0) and GUM constituency trees (CC BY 4.0) for to-deps, rewrite,
+// stats, validate and roundtrip of constituency trees; the UD version of IcePaHC (CC BY-SA 4.0) and GUM's dependencies
 // for validate, stats and to-brackets of CoNLL-U.
 import { describe, expect, it } from 'vitest';
 import { runBin } from '../support/bin.js';
@@ -15,16 +15,19 @@ const commands = [
   ['to-deps', (name: string) => (name === 'IcePaHC' ? ['--heads', 'penn-historical', '--labels', 'penn-historical', '--pos-map', 'penn-historical'] : ['--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb'])],
   ['rewrite', () => ['--traces', 'resolve']],
   ['stats', (name: string) => ['--arcs', '--traces', 'resolve', '--heads', name === 'IcePaHC' ? 'penn-historical' : 'en-content']],
+  ['validate', () => ['--source']],
+  ['roundtrip', (name: string) => (name === 'IcePaHC' ? ['--heads', 'penn-historical', '--labels', 'penn-historical'] : ['--heads', 'en-content', '--labels', 'en-ud'])],
 ] as const;
 
 describe('worker threads on the shared corpora', () => {
   for (const [name, files, read] of corpora) {
     for (const [command, options] of commands) {
       it(`${command} of ${name}: --jobs 3 gives the bytes of --jobs 1`, async () => {
-        const args = [command, ...options(name), ...read, '--verbose', ...files()];
+        // validate lists every problem already; the others are asked to.
+        const args = [command, ...options(name), ...read, ...(command === 'validate' ? [] : ['--verbose']), ...files()];
         const one = await runBin([...args, '--jobs', '1'], { limitMs: 300_000 });
         const three = await runBin([...args, '--jobs', '3'], { limitMs: 300_000 });
-        expect(one.stdout.length).toBeGreaterThan(command === 'stats' ? 500 : 1_000_000);
+        expect(one.stdout.length).toBeGreaterThan(command === 'stats' || command === 'roundtrip' ? 500 : command === 'validate' ? 40 : 1_000_000);
         expect(three.code).toBe(one.code);
         expect(three.stderr).toBe(one.stderr);
         expect(three.stdout === one.stdout).toBe(true);

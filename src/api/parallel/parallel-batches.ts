@@ -3,7 +3,7 @@ import type { BracketedReadOptions } from '../../formats/bracketed/read-options.
 import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
 import { WorkerPool } from './pool.js';
 import run from './worker.js';
-import type { TaskResult, Work } from './tasks.js';
+import type { DoneBatch, TaskResult, Work } from './tasks.js';
 
 /** Characters of input per task: enough that sending a task costs little beside converting it. */
 const TASK_SIZE = 64 * 1024;
@@ -11,7 +11,7 @@ const TASK_SIZE = 64 * 1024;
 const SLICE = 4 * 1024;
 
 /** What happened, in input order: a problem of the cutting, a batch built, a batch converted. */
-type Event = { kind: 'problem'; diagnostic: Diagnostic } | { kind: 'built'; batch: number } | { kind: 'done'; batch: number };
+type Event = { kind: 'file'; file: string } | { kind: 'problem'; diagnostic: Diagnostic } | { kind: 'built'; batch: number } | { kind: 'done'; batch: number };
 
 /** A run of events and the task converting their batches; the result is awaited in turn. */
 interface Group {
@@ -45,6 +45,13 @@ export class ParallelBatches {
     private readonly report: Report,
     /** Counts of what became of the trees, summed over the tasks; the keys are the work's. */
     private readonly tally: object,
+    /**
+     * Takes each batch done, in input order, after the problems before it and
+     * its own: gives the text to hand out (by default the batch's text).
+     */
+    private readonly take: (batch: DoneBatch) => string = (batch) => batch.text,
+    /** Hears each input start, in order with the batches (after every batch of the inputs before). */
+    private readonly onFile?: (file: string) => void,
   ) {
     // The main thread is one of the jobs: it converts every jobs-th task itself, between reading and
     // writing, so that N jobs start N - 1 worker threads (each a heap and a copy of the tables).
@@ -55,7 +62,7 @@ export class ParallelBatches {
 
   /** Works through one input given in pieces; yields text as it is ready, in order. Results may lag behind the input until {@link drain}. */
   async *run(pieces: AsyncIterable<string>, file: string): AsyncGenerator<string> {
-    let events: Event[] = [];
+    let events: Event[] = [{ kind: 'file', file }];
     let batches: CutBatch[] = [];
     let size = 0;
     let pushBatches = 0;
@@ -116,12 +123,13 @@ export class ParallelBatches {
     const result = group.result ? await group.result : undefined;
     let text = '';
     for (const event of group.events) {
-      if (event.kind === 'problem') this.emit(event.diagnostic);
+      if (event.kind === 'file') this.onFile?.(event.file);
+      else if (event.kind === 'problem') this.emit(event.diagnostic);
       else if (event.kind === 'built') for (const diagnostic of result!.batches[event.batch]!.built) this.emit(diagnostic);
       else {
         const done = result!.batches[event.batch]!;
         for (const diagnostic of done.done) this.emit(diagnostic);
-        text += done.text;
+        text += this.take(done);
       }
     }
     const tally = this.tally as Record<string, number>;

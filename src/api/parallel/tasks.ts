@@ -7,6 +7,8 @@ import type { Diagnostic } from '../../diagnostics/diagnostic.js';
 import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
 import type { CutBatch } from '../../formats/bracketed/tree-batches.js';
 import type { NamingOptions } from '../convert.js';
+import type { TreeIdAt } from '../../validate/check-sentence-ids.js';
+import type { TripPart } from '../../evaluate/roundtrip.js';
 
 /** Conversion options whose tables are named (shipped name or path), so that a worker can load them. */
 export interface NamedConversionOptions {
@@ -18,10 +20,24 @@ export interface NamedConversionOptions {
   punctuation?: 'phrase' | 'root';
 }
 
-/** What to do with each tree: convert it to CoNLL-U, or write it again as a bracketing. */
+/** Round trips of trees: the conversion there, the bracketing back, and what the report keeps. */
+export interface TripWork {
+  kind: 'roundtrip';
+  conversion: NamedConversionOptions;
+  lossless: boolean;
+  categories: string;
+  shape: 'flat' | 'layered';
+  pos: 'upos' | 'xpos';
+  examples: number;
+  countPunctuation: boolean;
+}
+
+/** What to do with each tree: convert it to CoNLL-U, write it again as a bracketing, check it, take it there and back. */
 export type Work =
   | { kind: 'convert'; conversion: NamedConversionOptions; naming: NamingOptions }
-  | { kind: 'rewrite'; traces: 'keep' | 'resolve'; layout: 'line' | 'indented' };
+  | { kind: 'rewrite'; traces: 'keep' | 'resolve'; layout: 'line' | 'indented' }
+  | { kind: 'validate' }
+  | TripWork;
 
 /** Do the work on the trees of some cut batches of one file. */
 export interface Task {
@@ -30,11 +46,27 @@ export interface Task {
   batches: CutBatch[];
 }
 
-/** What became of one batch: the problems found building its trees, those found doing the work, and the text written. */
+/** One tree checked on its own: where it starts, its words, its problems, and what the checks across trees need. */
+export interface CheckedTree {
+  start: number;
+  words: number;
+  problems: Diagnostic[];
+  id: TreeIdAt;
+}
+
+/**
+ * What became of one batch: the problems found building its trees, those
+ * found doing the work, and the text written; validation gives its trees one
+ * by one, a round trip its share of the report.
+ */
 export interface DoneBatch {
   built: Diagnostic[];
   done: Diagnostic[];
   text: string;
+  checked?: CheckedTree[];
+  trip?: TripPart;
+  /** Round trips: the trees left out (without words), by name. */
+  leftOut?: string[];
 }
 
 /** The batches of a task, and the counts of what became of their trees (summed over tasks in input order). */

@@ -9,7 +9,14 @@ import type { Tree } from '../../model/constituency.js';
 import { emptyConversionTally, TreeConverter } from '../convert.js';
 import { resolveConversionOptions, type ResolvedConversion } from '../options.js';
 import { emptyRewriteTally, TreeRewriter } from '../rewrite.js';
-import type { Task, TaskResult, Work } from './tasks.js';
+import type { CheckedTree, DoneBatch, Task, TaskResult, TripWork, Work } from './tasks.js';
+import { BracketedValidator } from '../../validate/validate-bracketed.js';
+import { treeIdOf } from '../../validate/check-sentence-ids.js';
+import { itemName } from '../../diagnostics/diagnostic.js';
+import { tripTree } from '../evaluate.js';
+import { BracketRoundTrip } from '../../evaluate/roundtrip.js';
+import { resolveBracketOptions } from '../brackets.js';
+import type { BracketSettings } from '../../reverse/build-brackets.js';
 import { SentenceWorker, type StretchEvent, type StretchTask } from './sentence-work.js';
 
 /** Tables are loaded once per worker and options: a run sends the same names with every task. */
@@ -25,21 +32,81 @@ function conversionOf(work: Extract<Work, { kind: 'convert' }>): ResolvedConvers
   return found;
 }
 
-/** One tree to its text, with the counts of what became of the trees. */
+/** The work on the trees of one task: each tree in turn, then what the batch gives beside the problems. */
 interface Worker {
-  write(tree: Tree): string;
+  add(tree: Tree): void;
+  /** What the trees added since the last call gave: text, checked trees, a share of a round trip. */
+  take(last: boolean): Pick<DoneBatch, 'text' | 'checked' | 'trip' | 'leftOut'>;
   tally: object;
 }
 
-function workerFor(work: Work, report: (diagnostic: Diagnostic) => void): Worker {
+/** Work whose product is text, one tree at a time. */
+function textWorker(write: (tree: Tree) => string, tally: object): Worker {
+  let text = '';
+  return {
+    add: (tree) => void (text += write(tree)),
+    take: () => {
+      const done = { text };
+      text = '';
+      return done;
+    },
+    tally,
+  };
+}
+
+function workerFor(work: Work, report: (diagnostic: Diagnostic) => void, sink: () => Diagnostic[]): Worker {
   if (work.kind === 'rewrite') {
     const rewriter = new TreeRewriter({ traces: work.traces, layout: work.layout }, report, emptyRewriteTally());
-    return { write: (tree) => rewriter.rewrite(tree), tally: rewriter.tally };
+    return textWorker((tree) => rewriter.rewrite(tree), rewriter.tally);
   }
+  if (work.kind === 'validate') return validationWorker(report, sink);
+  if (work.kind === 'roundtrip') return tripWorker(work, report);
   const { settings } = conversionOf(work);
   const options = { heads: settings.heads, labels: settings.labels, posMap: settings.upos, traces: settings.traces, coordination: settings.coordination, punctuation: settings.punctuation, ...work.naming };
   const converter = new TreeConverter(options, report, emptyConversionTally());
-  return { write: (tree) => converter.convertToText(tree), tally: converter.tally };
+  return textWorker((tree) => converter.convertToText(tree), converter.tally);
+}
+
+/** Each tree checked on its own, its problems kept with it: the main thread checks identifiers across trees. */
+function validationWorker(report: (diagnostic: Diagnostic) => void, sink: () => Diagnostic[]): Worker {
+  const validator = new BracketedValidator(report);
+  let checked: CheckedTree[] = [];
+  return {
+    add: (tree) => {
+      const problems = sink();
+      const words = validator.checkWithin(tree);
+      checked.push({ start: tree.position?.start ?? 0, words, problems: problems.splice(0), id: treeIdOf(tree) });
+    },
+    take: () => {
+      const done = { text: '', checked };
+      checked = [];
+      return done;
+    },
+    tally: {},
+  };
+}
+
+/** Round-trip settings are resolved once per worker and options, as conversion settings are. */
+const tripSettings = new Map<string, { conversion: ResolvedConversion; bracketing: BracketSettings }>();
+
+/** Trees taken there and back by a runner of this task's own; its counts go with the task's last batch, and the main thread adds up the parts in order. */
+function tripWorker(work: TripWork, report: (diagnostic: Diagnostic) => void): Worker {
+  const key = JSON.stringify(work);
+  let found = tripSettings.get(key);
+  if (!found) {
+    found = { conversion: resolveConversionOptions({ ...work.conversion, lossless: work.lossless }), bracketing: resolveBracketOptions({ categories: work.categories, shape: work.shape, pos: work.pos }) };
+    tripSettings.set(key, found);
+  }
+  const { conversion, bracketing } = found;
+  const runner = new BracketRoundTrip(conversion.settings, bracketing, work.examples, 0, work.countPunctuation, conversion.lossless);
+  const leftOut: string[] = [];
+  const tally = { read: 0 };
+  return {
+    // A bracketed tree is named by its file and line; the number is not needed.
+    add: (tree) => tripTree(runner, tree, itemName(tree, ++tally.read), leftOut, report),
+    take: (last) => (last ? { text: '', trip: runner.part(), leftOut } : { text: '' }),
+    tally,
+  };
 }
 
 /** Sentence workers, one per kind of work and settings (tables loaded once per thread). */
@@ -62,14 +129,13 @@ export default function run(task: Task | StretchTask): TaskResult | StretchEvent
 function runBatches(task: Task): TaskResult {
   let sink: Diagnostic[] = [];
   const report = (diagnostic: Diagnostic) => sink.push(diagnostic);
-  const worker = workerFor(task.work, report);
-  const batches = task.batches.map((batch) => {
+  const worker = workerFor(task.work, report, () => sink);
+  const batches = task.batches.map((batch, k) => {
     const built: Diagnostic[] = (sink = []);
     const trees = buildCutBatch(batch, task.read, report);
     const done: Diagnostic[] = (sink = []);
-    let text = '';
-    for (const tree of trees) text += worker.write(tree);
-    return { built, done, text };
+    for (const tree of trees) worker.add(tree);
+    return { built, done, ...worker.take(k === task.batches.length - 1) };
   });
   return { batches, tally: { ...worker.tally } as Record<string, number> };
 }

@@ -9,9 +9,17 @@ import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadi
 import { addConversionOptions, conversionOptionsOf, resolveConversion } from '../conversion-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
-import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
+import { checkInputs, openInputs, Output, type CliIO, type Input } from '../io.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter, tableErrorLines } from '../print-problems.js';
-import { readSentencesOf, readTreesOf } from '../read-trees.js';
+import { readInputs, readSentencesOf, readTreesOf } from '../read-trees.js';
+import { addJobsOption, jobsOf } from '../jobs-option.js';
+import { namedConversion } from '../converted-text.js';
+import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
+import type { DoneBatch, TripWork } from '../../api/parallel/tasks.js';
+import { bracketRoundTrip } from '../../api/evaluate.js';
+import type { BracketRoundTrip } from '../../evaluate/roundtrip.js';
+import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
+import type { Report } from '../../diagnostics/diagnostic.js';
 import { wholeNumber } from '../whole-number.js';
 
 export function registerRoundtrip(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -32,6 +40,7 @@ export function registerRoundtrip(program: Command, io: CliIO, done: (result: Co
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(command, false);
   addListingOptions(command);
+  addJobsOption(command);
   addBracketedReadOptions(command).action(async (files: string[], options: Record<string, unknown>, self: Command) => done(await roundtrip(files, options, io, self)));
 }
 
@@ -79,7 +88,23 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
     const resolved = resolveConversion(format === 'xml' ? { ...options, traces: 'resolve' } : options);
     if ('problems' in resolved) return { code: ExitCode.UsageOrIO, messages: resolved.problems };
     const conversion = { ...conversionOptionsOf(format === 'xml' ? { ...options, traces: 'resolve' } : options), heads: resolved.settings.heads, labels: resolved.settings.labels, posMap: resolved.settings.upos };
-    trip = await roundTrip({ trees: counted(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) }, { ...conversion, ...tripOptions }, problems.report);
+    const jobs = jobsOf(options);
+    // The sentences drawn for a page are chosen from the whole input as it streams by: such a run stays on one thread.
+    if (format === 'bracketed' && jobs > 1 && drawn === 0) {
+      const work: TripWork = {
+        kind: 'roundtrip',
+        conversion: namedConversion(options),
+        lossless: options.lossless === true,
+        categories: options.categories as string,
+        shape: tripOptions.shape,
+        pos: 'xpos',
+        examples: tripOptions.examples,
+        countPunctuation: tripOptions.countPunctuation,
+      };
+      const counts = { read: 0 };
+      trip = await tripOnThreads(inputs, bracketedReadOptions(options), work, bracketRoundTrip({ ...conversion, categories, shape: tripOptions.shape }, tripOptions.examples, 0, tripOptions.countPunctuation, 1), jobs, problems.report, counts, io);
+      read = counts.read;
+    } else trip = await roundTrip({ trees: counted(readTreesOf(inputs, bracketedReadOptions(options), problems.report, io)) }, { ...conversion, ...tripOptions }, problems.report);
   } else {
     const resolved = resolveConversion({ heads: options.heads ?? 'ud', labels: options.labels });
     if ('problems' in resolved) return { code: ExitCode.UsageOrIO, messages: resolved.problems };
@@ -112,6 +137,37 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   const exceeded = Object.entries(limits).filter(([kind, limit]) => share(report, kind as LossKind) > limit!);
   for (const [kind, limit] of exceeded) io.stderr.write(`treebridge: ${kind} losses ${share(report, kind as LossKind).toFixed(2)}% exceed ${limit}%\n`);
   return { code: exceeded.length > 0 || problems.errors > 0 ? ExitCode.Findings : ExitCode.Ok };
+}
+
+/**
+ * Trees there and back on worker threads: each task's trees go through a
+ * runner of its own and the parts are added to `runner` here, in input order,
+ * which gives the report one runner over all trees gives.
+ */
+async function tripOnThreads(
+  inputs: Input[],
+  read: BracketedReadOptions,
+  work: TripWork,
+  runner: BracketRoundTrip,
+  jobs: number,
+  report: Report,
+  counts: { read: number },
+  io: CliIO,
+): Promise<RoundTrip> {
+  const leftOut: string[] = [];
+  const take = (batch: DoneBatch) => {
+    if (batch.trip) runner.merge(batch.trip);
+    leftOut.push(...(batch.leftOut ?? []));
+    return '';
+  };
+  const parallel = new ParallelBatches(jobs, read, work, report, counts, take);
+  try {
+    for await (const _ of readInputs(inputs, (pieces, name) => parallel.run(pieces, name), io));
+    for await (const _ of parallel.drain());
+  } finally {
+    await parallel.close();
+  }
+  return { report: runner.report(), samples: [], leftOut };
 }
 
 function share(report: RoundTripReport, kind: LossKind): number {

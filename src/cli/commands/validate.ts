@@ -6,9 +6,12 @@ import { BracketedValidator, type ValidationSummary } from '../../validate/valid
 import { ConlluValidator, type ConlluSummary } from '../../validate/validate-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
-import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
+import { commonFormat, formatOf, inputFormats, type InputFormat } from '../input-format.js';
 import { checkInputs, describeError, openInputs, Output, type CliIO } from '../io.js';
-import { readTreesOf } from '../read-trees.js';
+import { readInputs, readTreesOf } from '../read-trees.js';
+import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
+import type { DoneBatch } from '../../api/parallel/tasks.js';
+import { readXmlGraphs } from '../../formats/xml-graph/read-xml-graph.js';
 import { plural, tableErrorLines } from '../print-problems.js';
 import { loadFeatureInventory, type FeatureInventory } from '../../tables/load-feature-inventory.js';
 import { TableError } from '../../tables/table-source.js';
@@ -79,7 +82,9 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   // printed in offset order, once the item after it begins (or its file ends).
   let current: Diagnostic[] = [];
   const collect: Report = (diagnostic) => current.push(diagnostic);
-  const emit = async (batch: Diagnostic[]) => {
+  /** Lines printed and not yet written: problems become lines in order, and are written in large pieces. */
+  let pending = '';
+  const emit = (batch: Diagnostic[]) => {
     if (batch.length === 0) return;
     if (json) {
       for (const diagnostic of batch) {
@@ -90,7 +95,13 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
       }
       return;
     }
-    await output.write(batch.map((d) => formatDiagnostic(d, { source: options.source === true })).join('\n') + '\n');
+    pending += batch.map((d) => formatDiagnostic(d, { source: options.source === true })).join('\n') + '\n';
+  };
+  const flush = async (least = 0) => {
+    if (pending.length <= least) return;
+    const text = pending;
+    pending = '';
+    await output.write(text);
   };
   /** Where each earlier file's problems end in `current`: a file's problems are all final once the next file starts. */
   const boundaries: number[] = [];
@@ -100,18 +111,20 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
   };
   const byOffset = (a: Diagnostic, b: Diagnostic) => a.offset - b.offset;
   /** Prints the problems of ended files, then those of the current file before an offset (all of them, without one). */
-  const drain = async (offset = Infinity) => {
+  const drain = (offset = Infinity) => {
     let from = 0;
     for (const boundary of boundaries.splice(0)) {
-      await emit(current.slice(from, boundary).sort(byOffset));
+      emit(current.slice(from, boundary).sort(byOffset));
       from = boundary;
     }
     const rest = current.slice(from).sort(byOffset);
     let cut = 0;
     while (cut < rest.length && rest[cut]!.offset < offset) cut++;
     current = rest.slice(cut);
-    await emit(rest.slice(0, cut));
+    emit(rest.slice(0, cut));
   };
+  /** Lines are written once this much is waiting. */
+  const PIECE = 64 * 1024;
   let run: Run;
   try {
     if (format === 'conllu') {
@@ -124,22 +137,60 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
           continue;
         }
         const result = event.result;
-        await drain(result.start);
+        drain(result.start);
         for (const diagnostic of result.problems) validator.report(diagnostic);
         validator.count(result.words ?? 0);
         validator.checkSentId(result.sentId);
+        await flush(PIECE);
       }
       run = validator;
     } else {
       const validator = new BracketedValidator(collect);
-      const trees = readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, nextInput(() => validator.startFile()));
-      for await (const tree of trees) {
-        await drain(tree.position?.start ?? 0);
-        validator.check(tree);
+      const jobs = jobsOf(options);
+      if (jobs > 1) {
+        // Trees are checked on their own on worker threads (bracketed input; XML graphs here, in turn);
+        // identifiers across trees here, in order.
+        const take = (batch: DoneBatch) => {
+          for (const tree of batch.checked ?? []) {
+            drain(tree.start);
+            for (const diagnostic of tree.problems) validator.report(diagnostic);
+            validator.count(tree.words);
+            validator.checkId(tree.id);
+          }
+          return '';
+        };
+        const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'validate' }, validator.report, {}, take, nextInput(() => validator.startFile()));
+        try {
+          const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string> {
+            if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
+              yield* parallel.run(pieces, name);
+              return;
+            }
+            yield* parallel.drain();
+            nextInput(() => validator.startFile())();
+            for await (const tree of readXmlGraphs(pieces, { file: name }, validator.report)) {
+              drain(tree.position?.start ?? 0);
+              validator.check(tree);
+              await flush(PIECE);
+            }
+          };
+          for await (const _ of readInputs(inputs, read, io)) await flush(PIECE);
+          for await (const _ of parallel.drain()) await flush(PIECE);
+        } finally {
+          await parallel.close();
+        }
+      } else {
+        const trees = readTreesOf(inputs, bracketedReadOptions(options), validator.report, io, nextInput(() => validator.startFile()));
+        for await (const tree of trees) {
+          drain(tree.position?.start ?? 0);
+          validator.check(tree);
+          await flush(PIECE);
+        }
       }
       run = validator;
     }
-    await drain();
+    drain();
+    await flush();
     const summary = run.summary;
     if (json) {
       const report = {
