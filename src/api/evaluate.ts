@@ -61,20 +61,31 @@ export async function roundTrip(
     for await (const tree of asAsync(items.trees)) tripTree(runner, tree, itemName(tree, ++number), leftOut, report);
     return { report: runner.report(), samples: runner.samples, leftOut };
   }
-  const bracketing = resolveBracketOptions({ categories, shape, pos: pos ?? 'upos' });
-  const resolved = resolveConversionOptions({ heads: conversionInput.heads ?? 'ud', labels: conversionInput.labels, traces: 'resolve', coordination: 'table' });
-  const runner = new DependencyRoundTrip(bracketing, resolved.settings, trip.examples, trip.samples, trip.countPunctuation, trip.seed);
+  const runner = dependencyRoundTrip({ categories, shape, pos, heads: conversionInput.heads, labels: conversionInput.labels }, trip.examples, trip.samples, trip.countPunctuation, trip.seed);
   let number = 0;
-  for await (const sentence of asAsync(items.sentences)) {
-    number++;
-    const id = itemName(sentence, number);
-    const problem = runner.add(sentence, id);
-    if (problem) {
-      leftOut.push(id);
-      report(diagnoseItem('not-a-tree', `sentence ${itemName(sentence, number)}: ${problem}; left out`, sentence));
-    }
-  }
+  for await (const sentence of asAsync(items.sentences)) tripSentence(runner, sentence, itemName(sentence, ++number), leftOut, report);
   return { report: runner.report(), samples: runner.samples, leftOut };
+}
+
+/** The runner of round trips of dependency sentences: brackets built with the bracketing options, read back with `heads` (default `ud`) and traces resolved. */
+export function dependencyRoundTrip(
+  options: Pick<Partial<ConversionOptions>, 'heads' | 'labels'> & z.input<typeof bracketOptionsSchema>,
+  examples: number,
+  samples: number,
+  countPunctuation: boolean,
+  seed: number,
+): DependencyRoundTrip {
+  const bracketing = resolveBracketOptions({ categories: options.categories, shape: options.shape, pos: options.pos ?? 'upos' });
+  const resolved = resolveConversionOptions({ heads: options.heads ?? 'ud', labels: options.labels, traces: 'resolve', coordination: 'table' });
+  return new DependencyRoundTrip(bracketing, resolved.settings, examples, samples, countPunctuation, seed);
+}
+
+/** Takes one sentence there and back, as {@link roundTrip} does: a sentence that is not a tree is reported and its id added to `leftOut`. */
+export function tripSentence(runner: DependencyRoundTrip, sentence: DependencySentence, id: string, leftOut: string[], report: Report): void {
+  const problem = runner.add(sentence, id);
+  if (!problem) return;
+  leftOut.push(id);
+  report(diagnoseItem('not-a-tree', `sentence ${id}: ${problem}; left out`, sentence));
 }
 
 /** The runner of round trips of trees, with the conversion and bracketing options resolved. */

@@ -9,7 +9,7 @@ import { carryBrackets } from '../lossless/carry-brackets.js';
 import { carryComment } from '../lossless/carry-wordless-trees.js';
 import { writeTree } from '../traces/write-tree.js';
 import type { HeadTable } from '../tables/table-model.js';
-import { AttachmentScorer } from './score-attachments.js';
+import { AttachmentScorer, type AttachmentScore } from './score-attachments.js';
 import { EvenSample } from './sample-evenly.js';
 import { formatLabel } from '../model/label.js';
 import { bracketScores, emptyTotals, scoreBrackets, type BracketTotals, type Span } from './parseval.js';
@@ -60,6 +60,20 @@ export interface TripPart {
   losses: Record<LossKind, number>;
   examples: Record<LossKind, string[]>;
   wordless: number;
+}
+
+/** The dependencies direction's counts over some sentences, as plain data (see {@link DependencyRoundTrip.merge}). */
+export interface DependencyTripPart {
+  scorer: { score: AttachmentScore; confusions: Map<string, number> };
+  exact: number;
+  sentences: number;
+  losses: Record<LossKind, number>;
+  examples: Record<LossKind, string[]>;
+}
+
+/** Adds examples of later items to the first ones, each id once, up to `max` per kind: the first examples of the whole. */
+function mergeExamples(ours: Record<LossKind, string[]>, theirs: Record<LossKind, string[]>, max: number): void {
+  for (const kind of lossKinds) for (const id of theirs[kind]) if (ours[kind].length < max && !ours[kind].includes(id)) ours[kind].push(id);
 }
 
 /** Totals of a round trip over a corpus. */
@@ -292,11 +306,8 @@ export class BracketRoundTrip {
   /** Adds the counts of the trees after those seen so far, as another runner took them there and back. */
   merge(part: TripPart): void {
     for (const key of Object.keys(this.totals) as Array<keyof BracketTotals>) this.totals[key] += part.totals[key];
-    for (const kind of lossKinds) {
-      this.losses[kind] += part.losses[kind];
-      // The first examples of the whole: the part's first ones carry on from ours, each id once.
-      for (const id of part.examples[kind]) if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
-    }
+    for (const kind of lossKinds) this.losses[kind] += part.losses[kind];
+    mergeExamples(this.examples, part.examples, this.maxExamples);
     this.wordless += part.wordless;
   }
 
@@ -380,6 +391,20 @@ export class DependencyRoundTrip {
   private note(kind: LossKind, id: string, count = 1): void {
     this.losses[kind] += count;
     if (this.examples[kind].length < this.maxExamples && !this.examples[kind].includes(id)) this.examples[kind].push(id);
+  }
+
+  /** The counts so far, as plain data. */
+  part(): DependencyTripPart {
+    return { scorer: { score: this.scorer.score, confusions: this.scorer.confusions }, exact: this.exact, sentences: this.sentences, losses: this.losses, examples: this.examples };
+  }
+
+  /** Adds the counts of the sentences after those seen so far, as another runner took them there and back. */
+  merge(part: DependencyTripPart): void {
+    this.scorer.merge(part.scorer);
+    this.exact += part.exact;
+    this.sentences += part.sentences;
+    for (const kind of lossKinds) this.losses[kind] += part.losses[kind];
+    mergeExamples(this.examples, part.examples, this.maxExamples);
   }
 
   report(): RoundTripReport {

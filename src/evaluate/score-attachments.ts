@@ -88,6 +88,20 @@ export class AttachmentScorer {
     return true;
   }
 
+  /** Adds the counts of another scorer (of the sentences after these), as if it had scored them here. */
+  merge(other: { score: AttachmentScore; confusions: Map<string, number> }): void {
+    const { features, ...counts } = other.score;
+    for (const key of Object.keys(counts) as Array<Exclude<keyof AttachmentScore, 'features'>>) this.score[key] += counts[key];
+    for (const [name, tally] of features) {
+      const ours = this.score.features.get(name);
+      if (ours) {
+        ours.scored += tally.scored;
+        ours.right += tally.right;
+      } else this.score.features.set(name, { ...tally });
+    }
+    for (const [key, count] of other.confusions) this.confusions.set(key, (this.confusions.get(key) ?? 0) + count);
+  }
+
   /** UPOS and features of one word against its gold. */
   private scoreWord(word: DependencyWord, gold: DependencyWord): void {
     if (gold.upos !== '_') {

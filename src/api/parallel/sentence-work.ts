@@ -15,12 +15,16 @@ import { ConlluValidator, sentIdOf, type SentIdAt } from '../../validate/validat
 import { emptyBracketTally, rebuildSentence, resolveBracketOptions, type BracketTally } from '../brackets.js';
 import { TreeRewriter } from '../rewrite.js';
 import { measureSentence } from '../structure.js';
+import { DependencyRoundTrip, type DependencyTripPart } from '../../evaluate/roundtrip.js';
+import { resolveConversionOptions } from '../options.js';
+import { tripSentence } from '../evaluate.js';
 
 /** What to do with each sentence, with settings named so that a worker thread can load them. */
 export type SentenceWork =
   | { kind: 'validate'; relations?: string[]; features: string[] }
   | { kind: 'structure' }
-  | { kind: 'brackets'; categories: string; shape: 'flat' | 'layered'; pos: 'upos' | 'xpos'; lossless: boolean; layout: Layout };
+  | { kind: 'brackets'; categories: string; shape: 'flat' | 'layered'; pos: 'upos' | 'xpos'; lossless: boolean; layout: Layout }
+  | { kind: 'trip'; heads: string; labels?: string; categories: string; shape: 'flat' | 'layered'; examples: number; countPunctuation: boolean };
 
 /** A stretch of one file's CoNLL-U, and the work to do on its sentences. */
 export interface StretchTask {
@@ -52,6 +56,9 @@ export interface SentenceResult {
   /** Its lifted arcs, for the line a run with --lifts prints, and how many of `problems` come before that line. */
   lifts?: string;
   liftsAt?: number;
+  /** trip: its counts there and back, and whether it was left out (not a tree). */
+  trip?: DependencyTripPart;
+  leftOut?: boolean;
 }
 
 /** A problem of the reading, or a sentence done, in the order the work on one thread gives them. */
@@ -62,6 +69,8 @@ export class SentenceWorker {
   private readonly validator?: ConlluValidator;
   private readonly brackets?: ReturnType<typeof resolveBracketOptions>;
   private readonly rewriter?: TreeRewriter;
+  /** A fresh runner per sentence, from settings resolved once. */
+  private readonly trip?: () => DependencyRoundTrip;
   private sink: Diagnostic[] = [];
   private readonly report: Report = (diagnostic) => this.sink.push(diagnostic);
 
@@ -73,6 +82,10 @@ export class SentenceWorker {
     } else if (work.kind === 'brackets') {
       this.brackets = resolveBracketOptions({ categories: work.categories, shape: work.shape, pos: work.pos, lossless: work.lossless });
       this.rewriter = new TreeRewriter({ traces: 'keep', layout: work.layout }, this.report);
+    } else if (work.kind === 'trip') {
+      const bracketing = resolveBracketOptions({ categories: work.categories, shape: work.shape, pos: 'upos' });
+      const { settings } = resolveConversionOptions({ heads: work.heads, labels: work.labels, traces: 'resolve', coordination: 'table' });
+      this.trip = () => new DependencyRoundTrip(bracketing, settings, work.examples, 0, work.countPunctuation);
     }
   }
 
@@ -109,6 +122,12 @@ export class SentenceWorker {
         if (bracketing !== '' && rebuilt.sentence) written++;
       }
       Object.assign(result, { text, written, tally, inserted: rewriter.tally.inserted - inserted });
+    } else if (this.trip) {
+      const runner = this.trip();
+      const leftOut: string[] = [];
+      tripSentence(runner, sentence, result.name, leftOut, this.report);
+      result.trip = runner.part();
+      if (leftOut.length > 0) result.leftOut = true;
     } else {
       const structure = measureSentence(sentence, this.report);
       if (structure) result.structure = structure;

@@ -16,7 +16,8 @@ import { addJobsOption, jobsOf } from '../jobs-option.js';
 import { namedConversion } from '../converted-text.js';
 import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
 import type { DoneBatch, TripWork } from '../../api/parallel/tasks.js';
-import { bracketRoundTrip } from '../../api/evaluate.js';
+import { bracketRoundTrip, dependencyRoundTrip } from '../../api/evaluate.js';
+import { sentenceEvents } from '../sentence-events.js';
 import type { BracketRoundTrip } from '../../evaluate/roundtrip.js';
 import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
 import type { Report } from '../../diagnostics/diagnostic.js';
@@ -108,7 +109,24 @@ async function roundtrip(files: string[], options: Record<string, unknown>, io: 
   } else {
     const resolved = resolveConversion({ heads: options.heads ?? 'ud', labels: options.labels });
     if ('problems' in resolved) return { code: ExitCode.UsageOrIO, messages: resolved.problems };
-    trip = await roundTrip({ sentences: counted(readSentencesOf(inputs, problems.report, io)) }, { heads: resolved.settings.heads, labels: resolved.settings.labels, ...tripOptions }, problems.report);
+    const jobs = jobsOf(options);
+    if (jobs > 1 && drawn === 0) {
+      // Each sentence there and back on a thread; the counts added up here, in order.
+      const runner = dependencyRoundTrip({ heads: resolved.settings.heads, labels: resolved.settings.labels, categories, shape: tripOptions.shape }, tripOptions.examples, 0, tripOptions.countPunctuation, 1);
+      const work = { kind: 'trip' as const, heads: (options.heads as string | undefined) ?? 'ud', labels: options.labels as string | undefined, categories: options.categories as string, shape: tripOptions.shape, examples: tripOptions.examples, countPunctuation: tripOptions.countPunctuation };
+      const leftOut: string[] = [];
+      for await (const event of sentenceEvents(inputs, work, jobs, io)) {
+        if (event.kind === 'problem') {
+          problems.report(event.diagnostic);
+          continue;
+        }
+        read++;
+        for (const diagnostic of event.result.problems) problems.report(diagnostic);
+        if (event.result.trip) runner.merge(event.result.trip);
+        if (event.result.leftOut) leftOut.push(event.result.name);
+      }
+      trip = { report: runner.report(), samples: [], leftOut };
+    } else trip = await roundTrip({ sentences: counted(readSentencesOf(inputs, problems.report, io)) }, { heads: resolved.settings.heads, labels: resolved.settings.labels, ...tripOptions }, problems.report);
   }
   const unit = format === 'conllu' ? 'sentence' : 'tree';
   const leftOut = trip.leftOut.length;
