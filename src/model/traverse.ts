@@ -87,23 +87,21 @@ export function rebuildBottomUp<T, U>(
   kids: (node: T) => readonly T[] | undefined,
   make: (node: T, children: U[]) => U | undefined,
 ): U[] {
-  const built = new Map<T, U | undefined>();
+  // In post-order a node's children are the last nodes made before it, in order: they sit on top of
+  // a stack of results (undefined for a node left out), and give way to their parent's.
+  const made: Array<U | undefined> = [];
   for (const node of postOrder(roots, kids)) {
+    const count = kids(node)?.length ?? 0;
+    const first = made.length - count;
     const children: U[] = [];
-    for (const child of kids(node) ?? []) {
-      const made = built.get(child);
-      if (made !== undefined) children.push(made);
+    for (let i = first; i < made.length; i++) {
+      const child = made[i];
+      if (child !== undefined) children.push(child);
     }
-    built.set(node, make(node, children));
-    // Children are no longer needed once their parent is built; dropping them keeps the map small.
-    for (const child of kids(node) ?? []) built.delete(child);
+    made.length = first;
+    made.push(make(node, children));
   }
-  const result: U[] = [];
-  for (const root of roots) {
-    const made = built.get(root);
-    if (made !== undefined) result.push(made);
-  }
-  return result;
+  return made.filter((root): root is U => root !== undefined);
 }
 
 /** The words of the sentence, in order, as their preterminals. */

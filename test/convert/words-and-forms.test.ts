@@ -102,3 +102,24 @@ describe('UD words from a Penn-Treebank-style tree', () => {
     }
   });
 });
+
+describe('forms in normalization form C', () => {
+  it('composes a decomposed accent and leaves precomposed and plain forms as they are', () => {
+    const sentence = columns('( (IP-MAT (NP-SBJ (N-N Cafe\u0301)) (VBDI opened) (. .)))', historical);
+    const forms = sentence.lines.filter((line) => line.type === 'word').map((line) => line.form);
+    expect(forms).toEqual(['Caf\u00e9', 'opened', '.']);
+    const plain = columns('( (IP-MAT (NP-SBJ (N-N Þórður)) (VBDI sá) (. .)))', historical);
+    expect(plain.lines.filter((line) => line.type === 'word').map((line) => line.form)).toEqual(['Þórður', 'sá', '.']);
+  });
+
+  // Source: Unicode Standard Annex #15, quick check (from memory): every code point below U+0300 has
+  // NFC_Quick_Check=Yes and combining class 0, which is why forms made only of them skip normalizing.
+  // Checked here against the runtime's own Unicode data, all 768 of them, alone and in pairs.
+  it('has every character below U+0300 unchanged by normalization, alone and before any other', () => {
+    for (let code = 0; code < 0x300; code++) {
+      const char = String.fromCharCode(code);
+      expect(char.normalize('NFC')).toBe(char);
+      for (const next of ['a', 'e', 'A', 'Þ', 'ð', '\u02ff']) expect((char + next).normalize('NFC')).toBe(char + next);
+    }
+  });
+});
