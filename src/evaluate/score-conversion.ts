@@ -4,7 +4,7 @@ import { headVector, wordsOf } from '../analysis/heads.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence, DependencyWord } from '../model/dependency.js';
 import { AttachmentScorer, isPunctuation, universalPart } from './score-attachments.js';
-import { emptyTally, pairWithGold, type PairingTally } from './pair-with-gold.js';
+import { emptyTally, pairWithGold, type GoldPair, type PairingTally } from './pair-with-gold.js';
 import { EvenSample } from './sample-evenly.js';
 
 /** One word the conversion attached wrongly, for the error tables. */
@@ -96,22 +96,61 @@ export async function scoreConversion(
   unscored?: (word: DependencyWord) => boolean,
   sampling: Sampling = { size: 0, seed: 1 },
 ): Promise<ConversionScore> {
-  const sample = new EvenSample<HeadSample>(sampling.size, sampling.seed);
-  const scorer = new AttachmentScorer(withPunctuation, unscored);
-  const oracle = new AttachmentScorer(withPunctuation, unscored);
-  const errors: AttachmentError[] = [];
-  const parents = new Map<string, ParentTally>();
-  let skipped = 0;
-  for await (const { tree, gold: goldSentence, id } of pairWithGold(trees, gold, settings.traces, report, tally, unscored)) {
+  const scorer = new ConversionScorer(settings, withPunctuation, unscored, sampling);
+  for await (const pair of pairWithGold(trees, gold, settings.traces, report, tally, unscored)) scorer.add(pair);
+  return scorer.result();
+}
+
+/**
+ * A conversion's scores over some pairs, as plain data: a worker thread
+ * scores a batch of pairs and the main thread adds the parts up in input
+ * order ({@link ConversionScorer.merge}), which gives what one scorer over all
+ * the pairs gives.
+ */
+export interface ScorePart {
+  scorer: ScorerCounts;
+  oracle: ScorerCounts;
+  errors: AttachmentError[];
+  parents: ParentTally[];
+  skipped: number;
+}
+
+type ScorerCounts = Parameters<AttachmentScorer['merge']>[0];
+
+/** Sentence ids of the first errors kept per parent category. */
+const PARENT_EXAMPLES = 3;
+
+/** Scores pairs of a tree and its gold sentence one at a time (see {@link scoreConversion}). */
+export class ConversionScorer {
+  private readonly sample: EvenSample<HeadSample>;
+  private readonly scorer: AttachmentScorer;
+  private readonly oracle: AttachmentScorer;
+  private readonly errors: AttachmentError[] = [];
+  private readonly parents = new Map<string, ParentTally>();
+  private skipped = 0;
+
+  constructor(
+    private readonly settings: ConversionSettings,
+    private readonly withPunctuation = false,
+    private readonly unscored?: (word: DependencyWord) => boolean,
+    sampling: Sampling = { size: 0, seed: 1 },
+  ) {
+    this.sample = new EvenSample<HeadSample>(sampling.size, sampling.seed);
+    this.scorer = new AttachmentScorer(withPunctuation, unscored);
+    this.oracle = new AttachmentScorer(withPunctuation, unscored);
+  }
+
+  add({ tree, gold: goldSentence, id }: GoldPair): void {
+    const { settings, withPunctuation, unscored, parents, errors } = this;
     const conversion = convertTree(tree, settings, id, id);
     const heads = headVector(goldSentence);
     if (!conversion || !heads) {
-      skipped++;
-      continue;
+      this.skipped++;
+      return;
     }
-    scorer.add(conversion.sentence, goldSentence, true);
+    this.scorer.add(conversion.sentence, goldSentence, true);
     const oracleConversion = convertTree(tree, { ...settings, oracle: heads }, id, id);
-    if (oracleConversion) oracle.add(oracleConversion.sentence, goldSentence, true);
+    if (oracleConversion) this.oracle.add(oracleConversion.sentence, goldSentence, true);
     const goldWords = goldSentence.lines.filter((l): l is DependencyWord => l.type === 'word');
     const parentOf = parentsByWord(conversion.root, conversion.words.length);
     const oracleWords = oracleConversion ? wordsOf(oracleConversion.sentence) : [];
@@ -128,7 +167,7 @@ export async function scoreConversion(
       tally.words++;
       if (line.head === goldWord.head) return;
       tally.errors++;
-      if (tally.examples.length < 3 && !tally.examples.includes(id)) tally.examples.push(id);
+      if (tally.examples.length < PARENT_EXAMPLES && !tally.examples.includes(id)) tally.examples.push(id);
       const oracleRight = oracleWords[i]?.head === goldWord.head;
       const error: AttachmentError = {
         sentence: id,
@@ -145,8 +184,8 @@ export async function scoreConversion(
       errors.push(error);
       sentenceErrors.push(error);
     });
-    if (sentenceErrors.length === 0) continue;
-    sample.offer(() => ({
+    if (sentenceErrors.length === 0) return;
+    this.sample.offer(() => ({
       id,
       tree,
       converted: conversion.sentence,
@@ -156,8 +195,35 @@ export async function scoreConversion(
       choices: oracleConversion ? wrongChoices(conversion.root, oracleConversion.root) : [],
     }));
   }
-  const byParent = [...parents.values()].sort((a, b) => b.errors - a.errors || b.words - a.words);
-  return { scorer, oracle, errors, byParent, skipped, samples: sample.items() };
+
+  /** The scores so far, as plain data (see ScorePart). */
+  part(): ScorePart {
+    const counts = (scorer: AttachmentScorer) => ({ score: scorer.score, confusions: scorer.confusions });
+    return { scorer: counts(this.scorer), oracle: counts(this.oracle), errors: this.errors, parents: [...this.parents.values()], skipped: this.skipped };
+  }
+
+  /** Adds the scores of the pairs after those seen so far, as another scorer scored them. */
+  merge(part: ScorePart): void {
+    this.scorer.merge(part.scorer);
+    this.oracle.merge(part.oracle);
+    for (const error of part.errors) this.errors.push(error);
+    for (const theirs of part.parents) {
+      const ours = this.parents.get(theirs.category);
+      if (!ours) {
+        this.parents.set(theirs.category, { ...theirs, examples: [...theirs.examples] });
+        continue;
+      }
+      ours.words += theirs.words;
+      ours.errors += theirs.errors;
+      for (const id of theirs.examples) if (ours.examples.length < PARENT_EXAMPLES && !ours.examples.includes(id)) ours.examples.push(id);
+    }
+    this.skipped += part.skipped;
+  }
+
+  result(): ConversionScore {
+    const byParent = [...this.parents.values()].sort((a, b) => b.errors - a.errors || b.words - a.words);
+    return { scorer: this.scorer, oracle: this.oracle, errors: this.errors, byParent, skipped: this.skipped, samples: this.sample.items() };
+  }
 }
 
 /** The phrases whose head child differs between two conversions of one tree (the table's and the oracle's). */

@@ -107,6 +107,45 @@ describe('commands on worker threads', () => {
   });
 });
 
+// Trees and their gold: the demo trees and their gold sentences repeated past many tasks, a tree
+// without words (it takes no gold sentence) after each copy, one copy whose gold has a word changed
+// (that pair is misaligned and left out), and more gold than trees at the end.
+function scoredPairs(folder: string): { trees: string; gold: string } {
+  const harbour = demo('harbour.psd');
+  const gold = demo('harbour-gold.conllu');
+  const trees: string[] = [];
+  const golds: string[] = [];
+  for (let k = 0; k < 120; k++) {
+    trees.push(harbour, '( (NP-SBJ (-NONE- *pro*)))\n');
+    const copy = gold.replace(/sent_id = (\S+)/g, `sent_id = $1.${k}`);
+    golds.push(k === 50 ? copy.replace(/\tharbour\t/, '\tharbor\t') : copy);
+  }
+  golds.push(gold.replace(/sent_id = (\S+)/g, 'sent_id = $1.extra'));
+  writeFileSync(join(folder, 'pairs.psd'), trees.join(''));
+  writeFileSync(join(folder, 'pairs.conllu'), golds.join(''));
+  return { trees: join(folder, 'pairs.psd'), gold: join(folder, 'pairs.conllu') };
+}
+
+describe('heads score on worker threads', () => {
+  it('scores as --jobs 1 does: figures, error tables, pairing problems and closing line', { timeout: 120_000 }, async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'treebridge-jobs-'));
+    const { trees, gold } = scoredPairs(folder);
+    for (const extra of [[], ['--json'], ['--unscored', 'Align=extra', '--score-punctuation', 'count']]) {
+      // A head table far from the gold's choices, so that there are errors to add up.
+      const args = ['heads', 'score', trees, '--gold', gold, '--heads', 'generic-right', '--labels', 'en-ud', '--verbose', '--strict', ...extra];
+      const one = await runBin([...args, '--jobs', '1'], { limitMs: 100_000 });
+      const three = await runBin([...args, '--jobs', '3'], { limitMs: 100_000 });
+      expect(one.code).toBe(1);
+      expect(one.stderr).toContain('[misaligned]');
+      expect(one.stderr).toContain('[nothing-to-convert]');
+      expect(one.stdout).toMatch(/UAS [1-8]\d\.\d\d%|"uas": 0\.[1-8]/);
+      expect(three.code).toBe(one.code);
+      expect(three.stderr).toBe(one.stderr);
+      expect(three.stdout).toBe(one.stdout);
+    }
+  });
+});
+
 // CoNLL-U input: the gold of the demo data repeated past many stretches, with renumbered sent_ids,
 // a duplicate, a sentence that is not a tree, crossing arcs, a second file without a final blank line.
 function largeConllu(folder: string): string[] {

@@ -63,3 +63,31 @@ describe('worker threads on the shared CoNLL-U', () => {
     }
   }
 });
+
+// heads score: GUM constituency trees against GUM's dependencies, IcePaHC against its UD version
+// (CC BY-SA 4.0), pairs converted and scored on threads and added up in order.
+const scoredCorpora = [
+  ['GUM', () => corpusFiles('gum/const', '.ptb'), () => corpusFiles('gum/dep', '.conllu'), ['--heads', 'en-content', '--labels', 'en-ud', '--pos-map', 'en-ptb']],
+  [
+    'IcePaHC',
+    () => corpusFiles('icepahc', '.psd'),
+    () => corpusFiles('icepahc-ud', '.conllu'),
+    ['--heads', 'penn-historical', '--labels', 'penn-historical', '--pos-map', 'penn-historical', '--lemmas', '--unscored', 'Align=absorbed,extra'],
+  ],
+] as const;
+
+describe('heads score on worker threads, on the shared corpora', () => {
+  for (const [name, trees, gold, options] of scoredCorpora) {
+    it(`heads score of ${name}: --jobs 3 gives the bytes of --jobs 1`, async () => {
+      for (const extra of [['--verbose'], ['--json']]) {
+        const args = ['heads', 'score', ...trees(), '--gold', ...gold(), ...options, ...extra];
+        const one = await runBin([...args, '--jobs', '1'], { limitMs: 300_000 });
+        const three = await runBin([...args, '--jobs', '3'], { limitMs: 300_000 });
+        expect(one.stdout).toMatch(/UAS 9\d\.\d\d%|"uas": 0\.9/);
+        expect(three.code).toBe(one.code);
+        expect(three.stderr).toBe(one.stderr);
+        expect(three.stdout === one.stdout).toBe(true);
+      }
+    });
+  }
+});

@@ -2,7 +2,8 @@ import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
-import type { Task, TaskResult } from './tasks.js';
+import type { PairTask, Task, TaskResult } from './tasks.js';
+import type { ScorePart } from '../../evaluate/score-conversion.js';
 import type { StretchEvent, StretchTask } from './sentence-work.js';
 
 /** The number of jobs a run uses when none is asked for: TREEBRIDGE_JOBS when set to a whole number, else one per core. */
@@ -42,8 +43,9 @@ export class WorkerPool {
 
   run(task: Task): Promise<TaskResult>;
   run(task: StretchTask): Promise<StretchEvent[]>;
-  run(task: Task | StretchTask): Promise<TaskResult | StretchEvent[]> {
-    return this.pool.run(task) as Promise<TaskResult | StretchEvent[]>;
+  run(task: PairTask): Promise<ScorePart>;
+  run(task: Task | StretchTask | PairTask): Promise<TaskResult | StretchEvent[] | ScorePart> {
+    return this.pool.run(task) as Promise<TaskResult | StretchEvent[] | ScorePart>;
   }
 
   async close(): Promise<void> {

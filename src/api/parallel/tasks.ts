@@ -9,6 +9,7 @@ import type { CutBatch } from '../../formats/bracketed/tree-batches.js';
 import type { NamingOptions } from '../convert.js';
 import type { TreeIdAt } from '../../validate/check-sentence-ids.js';
 import type { TripPart } from '../../evaluate/roundtrip.js';
+import type { DependencySentence } from '../../model/dependency.js';
 
 /** Conversion options whose tables are named (shipped name or path), so that a worker can load them. */
 export interface NamedConversionOptions {
@@ -73,4 +74,32 @@ export interface DoneBatch {
 export interface TaskResult {
   batches: DoneBatch[];
   tally: Record<string, number>;
+}
+
+/** How pairs of a tree and its gold sentence are scored, with tables named so that a worker can load them. */
+export interface PairWork {
+  conversion: NamedConversionOptions;
+  countPunctuation: boolean;
+  /** Gold words not to score, by a MISC key and its values. */
+  unscored?: { key: string; values: string[] };
+  /** How the trees were read, to read them again from their text. */
+  read: BracketedReadOptions;
+}
+
+/**
+ * A pair as it travels to a worker: the tree as its bracketed text (read
+ * again there, which costs far less than copying the built tree), the gold
+ * sentence without positions and line index.
+ */
+export interface TravellingPair {
+  id: string;
+  tree: string;
+  gold: DependencySentence;
+}
+
+/** Score some pairs, in order. */
+export interface PairTask {
+  kind: 'pairs';
+  work: PairWork;
+  pairs: TravellingPair[];
 }

@@ -9,11 +9,14 @@ import type { Tree } from '../../model/constituency.js';
 import { emptyConversionTally, TreeConverter } from '../convert.js';
 import { resolveConversionOptions, type ResolvedConversion } from '../options.js';
 import { emptyRewriteTally, TreeRewriter } from '../rewrite.js';
-import type { CheckedTree, DoneBatch, Task, TaskResult, TripWork, Work } from './tasks.js';
+import type { CheckedTree, DoneBatch, PairTask, PairWork, Task, TaskResult, TripWork, Work } from './tasks.js';
+import type { GoldPair } from '../../evaluate/pair-with-gold.js';
+import { readBracketedText } from '../../formats/bracketed/read-bracketed.js';
+import { ConversionScorer, type ScorePart } from '../../evaluate/score-conversion.js';
 import { BracketedValidator } from '../../validate/validate-bracketed.js';
 import { treeIdOf } from '../../validate/check-sentence-ids.js';
 import { itemName } from '../../diagnostics/diagnostic.js';
-import { tripTree } from '../evaluate.js';
+import { tripTree, unscoredTest } from '../evaluate.js';
 import { BracketRoundTrip } from '../../evaluate/roundtrip.js';
 import { resolveBracketOptions } from '../brackets.js';
 import type { BracketSettings } from '../../reverse/build-brackets.js';
@@ -120,9 +123,39 @@ function runStretch(task: StretchTask): StretchEvent[] {
   return worker.stretch(task);
 }
 
+/** Scorers' settings, resolved once per worker and options. */
+const scoreSettings = new Map<string, ResolvedConversion>();
+
+/** Pairs of a tree and its gold sentence scored by a scorer of this task's own; the main thread adds up the parts. */
+export function scoreGoldPairs(work: PairWork, pairs: Iterable<GoldPair>): ScorePart {
+  const key = JSON.stringify(work.conversion);
+  let found = scoreSettings.get(key);
+  if (!found) scoreSettings.set(key, (found = resolveConversionOptions(work.conversion)));
+  const { unscored } = work;
+  const scorer = new ConversionScorer(found.settings, work.countPunctuation, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
+  for (const pair of pairs) scorer.add(pair);
+  return scorer.part();
+}
+
+/**
+ * Pairs that travelled: their trees read again from their text, all in one
+ * reading (a reader costs something to set up); their problems were reported
+ * where they were first read. Each text was one tree there, so it is one here.
+ */
+function scorePairs(task: PairTask): ScorePart {
+  const ignore = () => undefined;
+  let trees = readBracketedText(task.pairs.map((pair) => pair.tree).join('\n'), task.work.read, ignore);
+  if (trees.length !== task.pairs.length) trees = task.pairs.map((pair) => readBracketedText(pair.tree, task.work.read, ignore)[0]!);
+  return scoreGoldPairs(
+    task.work,
+    task.pairs.map((pair, k) => ({ id: pair.id, tree: trees[k]!, gold: pair.gold })),
+  );
+}
+
 /** The entry point the pool calls with each task; the main thread calls it too, for its share. */
-export default function run(task: Task | StretchTask): TaskResult | StretchEvent[] {
+export default function run(task: Task | StretchTask | PairTask): TaskResult | StretchEvent[] | ScorePart {
   if ('kind' in task && task.kind === 'stretch') return runStretch(task);
+  if ('kind' in task && task.kind === 'pairs') return scorePairs(task);
   return runBatches(task as Task);
 }
 

@@ -6,12 +6,16 @@ import { addConversionOptions, conversionOptionsOf, conversionSettings } from '.
 import { addListingOptions, listingOf, plural, ProblemPrinter } from '../print-problems.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
-import type { InputFormat } from '../input-format.js';
+import { formatOf, type InputFormat } from '../input-format.js';
 import { readSentencesOf, readTreesOf } from '../read-trees.js';
 import type { ConversionScore } from '../../evaluate/score-conversion.js';
-import { scoreHeads as scoreHeadsOf, suggestHeads as suggestHeadsOf, suggestLabels as suggestLabelsOf } from '../../api/evaluate.js';
+import { scoreHeads as scoreHeadsOf, suggestHeads as suggestHeadsOf, suggestLabels as suggestLabelsOf, unscoredTest, type HeadScore } from '../../api/evaluate.js';
+import { ConversionScorer } from '../../evaluate/score-conversion.js';
+import { scorePairsOnThreads } from '../../api/parallel/parallel-pairs.js';
+import { addJobsOption, jobsOf } from '../jobs-option.js';
+import { namedConversion } from '../converted-text.js';
 import { compileHeadTable } from '../../tables/load-table.js';
-import { describePairing, emptyTally, pairingIncomplete, type PairingTally } from '../../evaluate/pair-with-gold.js';
+import { describePairing, emptyTally, pairingIncomplete, pairWithGold, type PairingTally } from '../../evaluate/pair-with-gold.js';
 import { basename, dirname, relative, resolve } from 'node:path';
 import { findTable, headrulesFolder, readTableText } from '../../tables/table-source.js';
 import { wholeNumber } from '../whole-number.js';
@@ -44,6 +48,7 @@ export function registerHeads(program: Command, io: CliIO, done: (result: Comman
     .option('-o, --output <file>', 'write the report to a file (default: standard output)');
   addConversionOptions(score);
   addListingOptions(score);
+  addJobsOption(score);
   addTreeFormatOption(score);
   addBracketedReadOptions(score).action(async (files: string[], options: Record<string, unknown>) => done(await scoreHeads(files, options, io)));
   const suggest = heads
@@ -129,22 +134,38 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
   const report = problems.report;
   let tally = emptyTally();
   try {
-    const result = await scoreHeadsOf(
-      readTreesOf(trees.inputs, bracketedReadOptions(options), report, io),
-      readSentencesOf(gold.inputs, report, io),
-      {
-        ...conversionOptionsOf(options),
-        heads: settings.heads,
-        labels: settings.labels,
-        posMap: settings.upos,
-        lossless: false,
-        countPunctuation: options.scorePunctuation === 'count',
-        unscored,
-        samples: typeof options.report === 'string' ? (options.reportLimit as number) : 0,
-        seed: options.reportSeed as number,
-      },
-      report,
-    );
+    const treeStream = readTreesOf(trees.inputs, bracketedReadOptions(options), report, io);
+    const goldStream = readSentencesOf(gold.inputs, report, io);
+    const countPunctuation = options.scorePunctuation === 'count';
+    const jobs = jobsOf(options);
+    let result: HeadScore;
+    // A tree travels to a thread as its bracketed text: trees of XML graphs are scored here.
+    const bracketed = trees.inputs.every((input) => formatOf(input, options.from as InputFormat | undefined) === 'bracketed');
+    if (jobs > 1 && bracketed && typeof options.report !== 'string') {
+      // Trees and gold are read and paired here, in order; the pairs are converted and scored on threads.
+      const pairing = emptyTally();
+      const scorer = new ConversionScorer(settings, countPunctuation, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
+      const pairs = pairWithGold(treeStream, goldStream, settings.traces, report, pairing, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
+      await scorePairsOnThreads(pairs, scorer, { conversion: namedConversion(options), countPunctuation, read: bracketedReadOptions(options), ...(unscored ? { unscored } : {}) }, jobs);
+      result = { ...scorer.result(), pairing };
+    } else {
+      result = await scoreHeadsOf(
+        treeStream,
+        goldStream,
+        {
+          ...conversionOptionsOf(options),
+          heads: settings.heads,
+          labels: settings.labels,
+          posMap: settings.upos,
+          lossless: false,
+          countPunctuation,
+          unscored,
+          samples: typeof options.report === 'string' ? (options.reportLimit as number) : 0,
+          seed: options.reportSeed as number,
+        },
+        report,
+      );
+    }
     tally = result.pairing;
     if (tally.paired === 0) {
       await output.abandon();
