@@ -70,7 +70,7 @@ export class ParallelSentences {
   private submit(task: StretchTask): void {
     if (this.submitted++ % this.jobs === 0) this.queue.push(this.local.stretch(task));
     else {
-      this.pool ??= new WorkerPool(this.jobs - 1);
+      this.pool ??= new WorkerPool(this.jobs - 1, 8);
       this.queue.push(this.pool.run(task) as unknown as Promise<StretchEvent[]>);
     }
   }
