@@ -221,6 +221,27 @@ console.log(row('treebridge to-brackets', conlluMB, bracketing) + `   (${Math.ro
     const bigValidate = command(['validate', conllu]);
     console.log(`  validate on the CoNLL-U of the ten copies: ${bigValidate.peakMB.toFixed(0)}`);
 
+    // The other commands that read the trees: validate, round trip, and heads score against the UD
+    // version of the same texts (CC BY-SA 4.0), at --jobs 1 and one job per core.
+    const gold = readdirSync(join(corpora, 'icepahc-ud')).filter((name) => name.endsWith('.conllu')).sort().map((name) => join(corpora, 'icepahc-ud', name));
+    console.log(`\nother commands on the bracketed file (fastest of ${rounds}):`);
+    console.log(`${'run'.padEnd(30)} ${'seconds'.padStart(8)} ${'words/s'.padStart(10)} ${'peak MB'.padStart(8)} ${'÷ --jobs 1'.padStart(12)}`);
+    for (const args of [
+      ['validate', '--lemmas', one],
+      ['roundtrip', ...tables.filter((arg) => arg !== '--quiet'), one],
+      ['heads', 'score', ...files, '--gold', ...gold, ...tables.filter((arg) => arg !== '--quiet'), '--unscored', 'Align=absorbed,extra'],
+    ]) {
+      let single = 0;
+      const name = args[0] === 'heads' ? 'heads score' : args[0]!;
+      for (const jobs of jobRuns.keys()) {
+        const runs: Measure[] = [];
+        for (let round = 0; round < rounds; round++) runs.push(command([...args, '--jobs', String(jobs)]));
+        const m = fastest(runs);
+        single ||= m.seconds;
+        console.log(`${`treebridge ${name} --jobs ${jobs}`.padEnd(30)} ${m.seconds.toFixed(2).padStart(8)} ${Math.round(words / m.seconds).toLocaleString('en-US').padStart(10)} ${m.peakMB.toFixed(0).padStart(8)} ${(m.seconds / single).toFixed(2).padStart(12)}`);
+      }
+    }
+
     // The commands that read CoNLL-U, on the CoNLL-U of the file, at --jobs 1 and one job per core.
     console.log(`\ncommands reading the CoNLL-U of the file, ${(statSync(oneConllu).size / 1048576).toFixed(1)} MB (fastest of ${rounds}):`);
     console.log(`${'run'.padEnd(30)} ${'seconds'.padStart(8)} ${'words/s'.padStart(10)} ${'peak MB'.padStart(8)} ${'÷ --jobs 1'.padStart(12)}`);

@@ -138,7 +138,19 @@ export class AttachmentScorer {
 }
 
 /** FEATS as a map from name to value (`_` gives none). */
-export function featureMap(feats: string): Map<string, string> {
+export function featureMap(feats: string): ReadonlyMap<string, string> {
+  let map = featureMaps.get(feats);
+  if (map) return map;
+  map = splitFeatures(feats);
+  if (featureMaps.size >= 20_000) featureMaps.clear();
+  featureMaps.set(feats, map);
+  return map;
+}
+
+/** The features of FEATS values seen already: scoring reads the same few thousand values again and again. Bounded. */
+const featureMaps = new Map<string, Map<string, string>>();
+
+function splitFeatures(feats: string): Map<string, string> {
   const map = new Map<string, string>();
   if (feats === '_' || feats === '') return map;
   for (const pair of feats.split('|')) {

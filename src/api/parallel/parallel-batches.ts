@@ -3,7 +3,7 @@ import type { BracketedReadOptions } from '../../formats/bracketed/read-options.
 import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
 import { WorkerPool } from './pool.js';
 import run from './worker.js';
-import type { DoneBatch, TaskResult, Work } from './tasks.js';
+import type { DoneBatch, Task, TaskResult, Work } from './tasks.js';
 
 /** Characters of input per task: enough that sending a task costs little beside converting it. */
 const TASK_SIZE = 64 * 1024;
@@ -35,6 +35,8 @@ export class ParallelBatches {
   private readonly inFlight: number;
   private readonly jobs: number;
   private submitted = 0;
+  /** Tasks handed to the worker threads and not yet done. */
+  private busy = 0;
   /** Files whose word without a lemma part has been reported: once per file, as when reading on one thread. */
   private readonly lemmaWarned = new Set<string>();
 
@@ -53,11 +55,11 @@ export class ParallelBatches {
     /** Hears each input start, in order with the batches (after every batch of the inputs before). */
     private readonly onFile?: (file: string) => void,
   ) {
-    // The main thread is one of the jobs: it converts every jobs-th task itself, between reading and
-    // writing, so that N jobs start N - 1 worker threads (each a heap and a copy of the tables).
+    // The main thread is one of the jobs: it converts a task itself, between reading and writing,
+    // when no worker is free, so that N jobs start N - 1 worker threads (each a heap and a copy of the tables).
     // Without a built worker module (run from the sources), the main thread does all the work.
     this.jobs = WorkerPool.available ? jobs : 1;
-    this.inFlight = jobs * 3;
+    this.inFlight = jobs * 8;
   }
 
   /** Works through one input given in pieces; yields text as it is ready, in order. Results may lag behind the input until {@link drain}. */
@@ -82,7 +84,7 @@ export class ParallelBatches {
     const submit = () => {
       if (events.length === 0) return;
       const task = { work: this.work, read: { ...this.read, file }, batches };
-      const result = batches.length === 0 ? undefined : this.submitted++ % this.jobs === 0 ? Promise.resolve(run(task) as TaskResult) : this.workers().run(task);
+      const result = batches.length === 0 ? undefined : this.assign(task);
       this.queue.push({ events, result });
       events = [];
       batches = [];
@@ -100,6 +102,20 @@ export class ParallelBatches {
     step(() => cutter.end());
     submit();
     while (this.queue.length > this.inFlight) yield await this.emitFirst();
+  }
+
+  /**
+   * A task goes to a worker thread when one is free, else the main thread does
+   * it at once: no thread waits for another while there is work, whether the
+   * workers are still starting or the main thread has more reading to do.
+   * The first task is always the main thread's: a small input starts no thread.
+   */
+  private assign(task: Task): Promise<TaskResult> {
+    if (this.jobs === 1 || this.submitted++ === 0 || this.busy >= this.jobs - 1) return Promise.resolve(run(task) as TaskResult);
+    this.busy++;
+    return this.workers()
+      .run(task)
+      .finally(() => this.busy--);
   }
 
   private workers(): WorkerPool {

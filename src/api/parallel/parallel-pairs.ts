@@ -12,8 +12,8 @@ const TASK_WORDS = 4096;
  * Scores pairs of a bracketed tree and its gold sentence on worker threads,
  * adding the parts to `scorer` in input order, which gives what scoring them
  * all on one thread gives. Pairing stays with the caller (it reads trees and
- * gold in order, and reports what does not pair). The main thread scores
- * every jobs-th task itself; at most a few tasks per job are in flight. Trees
+ * gold in order, and reports what does not pair). The main thread scores a
+ * task itself when no worker is free; at most a few tasks per job are in flight. Trees
  * must come from bracketed text (see TravellingPair).
  */
 export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer: ConversionScorer, work: PairWork, jobs: number): Promise<void> {
@@ -21,14 +21,17 @@ export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer
   let pool: WorkerPool | undefined;
   const queue: Array<ScorePart | Promise<ScorePart>> = [];
   let submitted = 0;
+  /** Tasks handed to the worker threads and not yet done: the main thread scores a task itself when none is free. */
+  let busy = 0;
   let batch: GoldPair[] = [];
   let words = 0;
   const submit = () => {
     if (batch.length === 0) return;
-    if (submitted++ % threads === 0) queue.push(scoreGoldPairs(work, batch));
+    if (threads === 1 || submitted++ === 0 || busy >= threads - 1) queue.push(scoreGoldPairs(work, batch));
     else {
       pool ??= new WorkerPool(threads - 1);
-      queue.push(pool.run({ kind: 'pairs', work, pairs: batch.map(travelling) }));
+      busy++;
+      queue.push(pool.run({ kind: 'pairs', work, pairs: batch.map(travelling) }).finally(() => busy--));
     }
     batch = [];
     words = 0;
@@ -39,7 +42,7 @@ export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer
       words += pair.gold.lines.length;
       if (words < TASK_WORDS) continue;
       submit();
-      while (queue.length > threads * 3) scorer.merge(await queue.shift()!);
+      while (queue.length > threads * 2) scorer.merge(await queue.shift()!);
     }
     submit();
     while (queue.length > 0) scorer.merge(await queue.shift()!);

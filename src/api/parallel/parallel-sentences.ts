@@ -8,7 +8,7 @@ import { SentenceWorker, type SentenceWork, type StretchEvent, type StretchTask 
  * as bracketings) on worker threads, giving the events that doing it on one
  * thread gives, in the same order. The main thread cuts the text into
  * stretches at sentence boundaries (SentenceCutter); each stretch is read and
- * worked on whole, by a worker or, every jobs-th one, by the main thread, and
+ * worked on whole, by a free worker or else by the main thread, and
  * the events come back in input order. At most a few stretches per job are in
  * flight, so memory does not grow with the input. Where no sentence boundary
  * comes for longer than a sentence may be, the rest of that file is read here.
@@ -20,13 +20,15 @@ export class ParallelSentences {
   private readonly jobs: number;
   private readonly inFlight: number;
   private submitted = 0;
+  /** Stretches handed to the worker threads and not yet done. */
+  private busy = 0;
 
   constructor(
     jobs: number,
     private readonly work: SentenceWork,
   ) {
     this.jobs = WorkerPool.available ? jobs : 1;
-    this.inFlight = jobs * 3;
+    this.inFlight = jobs * 4;
     this.local = new SentenceWorker(work);
   }
 
@@ -67,11 +69,18 @@ export class ParallelSentences {
     await this.pool?.close();
   }
 
+  /**
+   * A stretch goes to a worker thread when one is free, else the main thread
+   * works on it at once (see ParallelBatches.assign); the first is always the
+   * main thread's, so that a small input starts no thread.
+   */
   private submit(task: StretchTask): void {
-    if (this.submitted++ % this.jobs === 0) this.queue.push(this.local.stretch(task));
-    else {
-      this.pool ??= new WorkerPool(this.jobs - 1, 8);
-      this.queue.push(this.pool.run(task) as unknown as Promise<StretchEvent[]>);
+    if (this.jobs === 1 || this.submitted++ === 0 || this.busy >= this.jobs - 1) {
+      this.queue.push(this.local.stretch(task));
+      return;
     }
+    this.pool ??= new WorkerPool(this.jobs - 1, 8);
+    this.busy++;
+    this.queue.push(this.pool.run(task).finally(() => this.busy--));
   }
 }

@@ -220,8 +220,24 @@ function isNfc(text: string): boolean {
 
 const FEATURE_PAIR = /^([A-Z0-9][A-Za-z0-9]*(?:\[[a-z0-9]+\])?)=([A-Z0-9][A-Za-z0-9]*(?:,[A-Z0-9][A-Za-z0-9]*)*)$/;
 
+/**
+ * FEATS values checked already, and what was wrong with each: a treebank uses
+ * a few thousand distinct values millions of times, and the check compares
+ * names as people sort them (localeCompare), which costs. Bounded, so that a
+ * file of ever new values does not hold them all.
+ */
+const checkedFeats = new Map<string, string | undefined>();
+
 /** Why a FEATS value is not well formed, or undefined. */
 export function featsProblem(feats: string): string | undefined {
+  if (checkedFeats.has(feats)) return checkedFeats.get(feats);
+  const problem = checkFeats(feats);
+  if (checkedFeats.size >= 20_000) checkedFeats.clear();
+  checkedFeats.set(feats, problem);
+  return problem;
+}
+
+function checkFeats(feats: string): string | undefined {
   let previous: string | undefined;
   for (const pair of feats.split('|')) {
     const match = FEATURE_PAIR.exec(pair);
