@@ -208,11 +208,11 @@ export class Output {
    * Text written but not yet handed to the stream: many small writes cost more
    * than one large one (each is a call into the stream and, for a file, a
    * system call), so text leaves in pieces of {@link Output.PIECE} bytes. Each
-   * text is encoded as it comes: joining many strings built by concatenation
-   * first costs more than encoding them one by one.
+   * text is encoded straight into the piece being filled: no buffer per text,
+   * and no copy to join them. A piece handed to the stream is not touched again.
    */
-  private pending: Buffer[] = [];
-  private pendingLength = 0;
+  private piece: Buffer | undefined;
+  private used = 0;
   static readonly PIECE = 256 * 1024;
 
   private constructor(
@@ -260,18 +260,28 @@ export class Output {
     this.check();
     if (this.closed) return;
     if (text === '') return;
-    const bytes = Buffer.from(text, 'utf8');
-    this.pending.push(bytes);
-    this.pendingLength += bytes.length;
-    if (this.pendingLength >= Output.PIECE) await this.flush();
+    // A UTF-16 unit takes at most three bytes: only a text that might not fit is measured.
+    if (text.length * 3 > Output.PIECE - this.used) {
+      const bytes = Buffer.byteLength(text, 'utf8');
+      if (bytes > Output.PIECE - this.used) {
+        await this.flush();
+        if (bytes > Output.PIECE) return this.send(Buffer.from(text, 'utf8'));
+      }
+    }
+    this.piece ??= Buffer.allocUnsafe(Output.PIECE);
+    this.used += this.piece.write(text, this.used, 'utf8');
   }
 
   /** Hands the gathered text to the stream. */
   async flush(): Promise<void> {
-    if (this.pending.length === 0) return;
-    const bytes = this.pending.length === 1 ? this.pending[0]! : Buffer.concat(this.pending, this.pendingLength);
-    this.pending = [];
-    this.pendingLength = 0;
+    if (this.used === 0) return;
+    const bytes = this.piece!.subarray(0, this.used);
+    this.piece = undefined;
+    this.used = 0;
+    await this.send(bytes);
+  }
+
+  private async send(bytes: Buffer): Promise<void> {
     if (this.closed) return;
     // Wait for the stream to drain; an error instead is kept by the listener above and thrown below.
     if (!this.stream.write(bytes)) await drained(this.stream);
@@ -301,8 +311,8 @@ export class Output {
 
   /** Abandons the output: a temporary file is removed, the target left as it was. */
   async abandon(): Promise<void> {
-    this.pending = [];
-    this.pendingLength = 0;
+    this.piece = undefined;
+    this.used = 0;
     if (!this.file || !this.temporary) return;
     await new Promise<void>((resolve) => this.file!.end(() => resolve()));
     await unlink(this.temporary).catch(() => undefined);
