@@ -6,9 +6,9 @@ import { writeSentence } from '../formats/conllu/write-conllu.js';
 import { readXmlGraphs } from '../formats/xml-graph/read-xml-graph.js';
 import { bracketedReadOptions } from './bracketed-options.js';
 import { conversionOptionsOf } from './conversion-options.js';
-import { formatOf, type InputFormat } from './input-format.js';
+import type { InputFormat } from './input-format.js';
 import type { CliIO, Input } from './io.js';
-import { readInputs, readTreeBatchesOf } from './read-trees.js';
+import { bracketedOnThreads, readInputs, readTreeBatchesOf } from './read-trees.js';
 
 /** The conversion options with tables as the user named them, for worker threads to load. */
 export function namedConversion(options: Record<string, unknown>) {
@@ -41,15 +41,10 @@ export async function* convertedText(
   if (jobs > 1 && !resolved.lossless) {
     const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'convert', conversion: namedConversion(options), naming }, report, tally);
     try {
-      const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string> {
-        if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
-          yield* parallel.run(pieces, name);
-          return;
-        }
-        // An XML input is converted here, after everything before it.
-        yield* parallel.drain();
+      // An XML input is converted here, after everything before it.
+      const read = bracketedOnThreads(parallel, inputs, options.from as InputFormat | undefined, async function* (pieces, name) {
         for await (const tree of readXmlGraphs(pieces, { file: name }, report)) yield converter.convertToText(tree);
-      };
+      });
       yield* readInputs(inputs, read, io);
       yield* parallel.drain();
     } finally {

@@ -5,7 +5,8 @@ import { readConllu } from '../formats/conllu/read-conllu.js';
 import type { Tree } from '../model/constituency.js';
 import type { DependencySentence } from '../model/dependency.js';
 import { readXmlGraphs } from '../formats/xml-graph/read-xml-graph.js';
-import { formatOf, type TreeFormat } from './input-format.js';
+import { formatOf, type InputFormat, type TreeFormat } from './input-format.js';
+import type { ParallelBatches } from '../api/parallel/parallel-batches.js';
 import type { CliIO, Input } from './io.js';
 import { startProgress } from './progress.js';
 
@@ -82,4 +83,25 @@ export function readSentencesOf(
   onInput?: (input: Input) => void,
 ): AsyncGenerator<DependencySentence> {
   return readInputs(inputs, (pieces, name) => readConllu(pieces, { file: name }, report), io, onInput);
+}
+
+/**
+ * A reader for {@link readInputs} that hands bracketed inputs to worker
+ * threads and reads an XML graph input here, once everything before it is
+ * done: `xml` gives what the command makes of the input's graphs.
+ */
+export function bracketedOnThreads<T>(
+  parallel: ParallelBatches,
+  inputs: Input[],
+  from: InputFormat | undefined,
+  xml: (pieces: AsyncIterable<string>, name: string) => AsyncIterable<T>,
+): (pieces: AsyncIterable<string>, name: string) => AsyncGenerator<string | T> {
+  return async function* (pieces, name) {
+    if (formatOf(inputs.find((input) => input.name === name)!, from) !== 'xml') {
+      yield* parallel.run(pieces, name);
+      return;
+    }
+    yield* parallel.drain();
+    yield* xml(pieces, name);
+  };
 }

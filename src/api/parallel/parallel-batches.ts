@@ -1,9 +1,9 @@
 import type { Diagnostic, Report } from '../../diagnostics/diagnostic.js';
 import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
 import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
-import { WorkerPool } from './pool.js';
+import { SharedJobs } from './pool.js';
 import run from './worker.js';
-import type { DoneBatch, Task, TaskResult, Work } from './tasks.js';
+import type { DoneBatch, TaskResult, Work } from './tasks.js';
 
 /** Characters of input per task: enough that sending a task costs little beside converting it. */
 const TASK_SIZE = 64 * 1024;
@@ -29,14 +29,10 @@ interface Group {
  * memory does not grow with the input.
  */
 export class ParallelBatches {
-  /** Started when a second task comes: a small input never pays for starting threads. */
-  private pool: WorkerPool | undefined;
+  /** The main thread and the worker threads, which start when a second task comes: a small input never pays for starting threads. */
+  private readonly shared: SharedJobs;
   private readonly queue: Group[] = [];
   private readonly inFlight: number;
-  private readonly jobs: number;
-  private submitted = 0;
-  /** Tasks handed to the worker threads and not yet done. */
-  private busy = 0;
   /** Files whose word without a lemma part has been reported: once per file, as when reading on one thread. */
   private readonly lemmaWarned = new Set<string>();
 
@@ -57,8 +53,7 @@ export class ParallelBatches {
   ) {
     // The main thread is one of the jobs: it converts a task itself, between reading and writing,
     // when no worker is free, so that N jobs start N - 1 worker threads (each a heap and a copy of the tables).
-    // Without a built worker module (run from the sources), the main thread does all the work.
-    this.jobs = WorkerPool.available ? jobs : 1;
+    this.shared = new SharedJobs(jobs);
     this.inFlight = jobs * 8;
   }
 
@@ -84,7 +79,7 @@ export class ParallelBatches {
     const submit = () => {
       if (events.length === 0) return;
       const task = { work: this.work, read: { ...this.read, file }, batches };
-      const result = batches.length === 0 ? undefined : this.assign(task);
+      const result = batches.length === 0 ? undefined : Promise.resolve(this.shared.take(() => run(task) as TaskResult, (pool) => pool.run(task)));
       this.queue.push({ events, result });
       events = [];
       batches = [];
@@ -104,25 +99,6 @@ export class ParallelBatches {
     while (this.queue.length > this.inFlight) yield await this.emitFirst();
   }
 
-  /**
-   * A task goes to a worker thread when one is free, else the main thread does
-   * it at once: no thread waits for another while there is work, whether the
-   * workers are still starting or the main thread has more reading to do.
-   * The first task is always the main thread's: a small input starts no thread.
-   */
-  private assign(task: Task): Promise<TaskResult> {
-    if (this.jobs === 1 || this.submitted++ === 0 || this.busy >= this.jobs - 1) return Promise.resolve(run(task) as TaskResult);
-    this.busy++;
-    return this.workers()
-      .run(task)
-      .finally(() => this.busy--);
-  }
-
-  private workers(): WorkerPool {
-    this.pool ??= new WorkerPool(this.jobs - 1);
-    return this.pool;
-  }
-
   /** Waits for every task still running and yields their text, in order. */
   async *drain(): AsyncGenerator<string> {
     while (this.queue.length > 0) yield await this.emitFirst();
@@ -130,7 +106,7 @@ export class ParallelBatches {
 
   /** Stops the workers. */
   async close(): Promise<void> {
-    await this.pool?.close();
+    await this.shared.close();
   }
 
   /** Reports the problems of the first group in order and gives its text. */

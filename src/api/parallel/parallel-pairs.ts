@@ -1,7 +1,7 @@
 import type { GoldPair } from '../../evaluate/pair-with-gold.js';
 import type { ConversionScorer, ScorePart } from '../../evaluate/score-conversion.js';
 import type { DependencySentence } from '../../model/dependency.js';
-import { WorkerPool } from './pool.js';
+import { SharedJobs } from './pool.js';
 import { scoreGoldPairs } from './worker.js';
 import type { PairWork, TravellingPair } from './tasks.js';
 
@@ -12,27 +12,19 @@ const TASK_WORDS = 4096;
  * Scores pairs of a bracketed tree and its gold sentence on worker threads,
  * adding the parts to `scorer` in input order, which gives what scoring them
  * all on one thread gives. Pairing stays with the caller (it reads trees and
- * gold in order, and reports what does not pair). The main thread scores a
- * task itself when no worker is free; at most a few tasks per job are in flight. Trees
+ * gold in order, and reports what does not pair). A task is scored by a free
+ * worker, else here (see SharedJobs); at most a few tasks per job are in flight. Trees
  * must come from bracketed text (see TravellingPair).
  */
 export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer: ConversionScorer, work: PairWork, jobs: number): Promise<void> {
-  const threads = WorkerPool.available ? jobs : 1;
-  let pool: WorkerPool | undefined;
+  const shared = new SharedJobs(jobs);
   const queue: Array<ScorePart | Promise<ScorePart>> = [];
-  let submitted = 0;
-  /** Tasks handed to the worker threads and not yet done: the main thread scores a task itself when none is free. */
-  let busy = 0;
   let batch: GoldPair[] = [];
   let words = 0;
   const submit = () => {
     if (batch.length === 0) return;
-    if (threads === 1 || submitted++ === 0 || busy >= threads - 1) queue.push(scoreGoldPairs(work, batch));
-    else {
-      pool ??= new WorkerPool(threads - 1);
-      busy++;
-      queue.push(pool.run({ kind: 'pairs', work, pairs: batch.map(travelling) }).finally(() => busy--));
-    }
+    const pairs = batch;
+    queue.push(shared.take(() => scoreGoldPairs(work, pairs), (pool) => pool.run({ kind: 'pairs', work, pairs: pairs.map(travelling) })));
     batch = [];
     words = 0;
   };
@@ -42,12 +34,12 @@ export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer
       words += pair.gold.lines.length;
       if (words < TASK_WORDS) continue;
       submit();
-      while (queue.length > threads * 2) scorer.merge(await queue.shift()!);
+      while (queue.length > shared.jobs * 2) scorer.merge(await queue.shift()!);
     }
     submit();
     while (queue.length > 0) scorer.merge(await queue.shift()!);
   } finally {
-    await pool?.close();
+    await shared.close();
   }
 }
 

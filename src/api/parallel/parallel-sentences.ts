@@ -1,6 +1,6 @@
 import { openConlluReader, type ConlluReader } from '../../formats/conllu/read-conllu.js';
 import { SentenceCutter, type Stretch } from '../../formats/conllu/sentence-cutter.js';
-import { WorkerPool } from './pool.js';
+import { SharedJobs } from './pool.js';
 import { SentenceWorker, type SentenceWork, type StretchEvent, type StretchTask } from './sentence-work.js';
 
 /**
@@ -14,20 +14,17 @@ import { SentenceWorker, type SentenceWork, type StretchEvent, type StretchTask 
  * comes for longer than a sentence may be, the rest of that file is read here.
  */
 export class ParallelSentences {
-  private pool: WorkerPool | undefined;
+  /** Sentence work allocates less than conversion: workers with an 8 MB young generation keep two jobs within 150 MB. */
+  private readonly shared: SharedJobs;
   private readonly local: SentenceWorker;
   private readonly queue: Array<Promise<StretchEvent[]> | StretchEvent[]> = [];
-  private readonly jobs: number;
   private readonly inFlight: number;
-  private submitted = 0;
-  /** Stretches handed to the worker threads and not yet done. */
-  private busy = 0;
 
   constructor(
     jobs: number,
     private readonly work: SentenceWork,
   ) {
-    this.jobs = WorkerPool.available ? jobs : 1;
+    this.shared = new SharedJobs(jobs, 8);
     this.inFlight = jobs * 4;
     this.local = new SentenceWorker(work);
   }
@@ -66,21 +63,11 @@ export class ParallelSentences {
   }
 
   async close(): Promise<void> {
-    await this.pool?.close();
+    await this.shared.close();
   }
 
-  /**
-   * A stretch goes to a worker thread when one is free, else the main thread
-   * works on it at once (see ParallelBatches.assign); the first is always the
-   * main thread's, so that a small input starts no thread.
-   */
+  /** A stretch is worked on by a free worker thread, else here at once (see SharedJobs). */
   private submit(task: StretchTask): void {
-    if (this.jobs === 1 || this.submitted++ === 0 || this.busy >= this.jobs - 1) {
-      this.queue.push(this.local.stretch(task));
-      return;
-    }
-    this.pool ??= new WorkerPool(this.jobs - 1, 8);
-    this.busy++;
-    this.queue.push(this.pool.run(task).finally(() => this.busy--));
+    this.queue.push(this.shared.take(() => this.local.stretch(task), (pool) => pool.run(task)));
   }
 }

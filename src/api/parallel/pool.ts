@@ -59,3 +59,39 @@ export class WorkerPool {
     await this.pool.destroy();
   }
 }
+
+/**
+ * Shares tasks between the main thread and N - 1 worker threads: a task goes
+ * to a worker when one is free, else the main thread does it at once, so that
+ * no thread waits for another while there is work (the workers still starting,
+ * or the main thread with more reading to do). The first task is always the
+ * main thread's, so that a small input starts no thread. Without a built
+ * worker module (run from the sources), the main thread does every task.
+ */
+export class SharedJobs {
+  readonly jobs: number;
+  private pool: WorkerPool | undefined;
+  private given = 0;
+  /** Tasks handed to the workers and not yet done. */
+  private busy = 0;
+
+  constructor(
+    jobs: number,
+    /** The workers' young generation, in MB (see WorkerPool). */
+    private readonly youngMb = 16,
+  ) {
+    this.jobs = WorkerPool.available ? jobs : 1;
+  }
+
+  /** Does a task: `here` on this thread, or `there` on a free worker. */
+  take<T>(here: () => T, there: (pool: WorkerPool) => Promise<T>): T | Promise<T> {
+    if (this.jobs === 1 || this.given++ === 0 || this.busy >= this.jobs - 1) return here();
+    this.pool ??= new WorkerPool(this.jobs - 1, this.youngMb);
+    this.busy++;
+    return there(this.pool).finally(() => this.busy--);
+  }
+
+  async close(): Promise<void> {
+    await this.pool?.close();
+  }
+}

@@ -9,7 +9,7 @@ import type { Tree } from '../../model/constituency.js';
 import { emptyConversionTally, TreeConverter } from '../convert.js';
 import { resolveConversionOptions, type ResolvedConversion } from '../options.js';
 import { emptyRewriteTally, TreeRewriter } from '../rewrite.js';
-import type { CheckedTree, DoneBatch, PairTask, PairWork, Task, TaskResult, TripWork, Work } from './tasks.js';
+import type { CheckedTree, DoneBatch, NamedConversionOptions, PairTask, PairWork, Task, TaskResult, TripWork, Work } from './tasks.js';
 import type { GoldPair } from '../../evaluate/pair-with-gold.js';
 import { readBracketedText } from '../../formats/bracketed/read-bracketed.js';
 import { ConversionScorer, type ScorePart } from '../../evaluate/score-conversion.js';
@@ -25,11 +25,11 @@ import { SentenceWorker, type StretchEvent, type StretchTask } from './sentence-
 /** Tables are loaded once per worker and options: a run sends the same names with every task. */
 const resolved = new Map<string, ResolvedConversion>();
 
-function conversionOf(work: Extract<Work, { kind: 'convert' }>): ResolvedConversion {
-  const key = JSON.stringify(work.conversion);
+function conversionOf(conversion: NamedConversionOptions & { lossless?: boolean }): ResolvedConversion {
+  const key = JSON.stringify(conversion);
   let found = resolved.get(key);
   if (!found) {
-    found = resolveConversionOptions(work.conversion);
+    found = resolveConversionOptions(conversion);
     resolved.set(key, found);
   }
   return found;
@@ -64,7 +64,7 @@ function workerFor(work: Work, report: (diagnostic: Diagnostic) => void, sink: (
   }
   if (work.kind === 'validate') return validationWorker(report, sink);
   if (work.kind === 'roundtrip') return tripWorker(work, report);
-  const { settings } = conversionOf(work);
+  const { settings } = conversionOf(work.conversion);
   const options = { heads: settings.heads, labels: settings.labels, posMap: settings.upos, traces: settings.traces, coordination: settings.coordination, punctuation: settings.punctuation, ...work.naming };
   const converter = new TreeConverter(options, report, emptyConversionTally());
   return textWorker((tree) => converter.convertToText(tree), converter.tally);
@@ -89,18 +89,15 @@ function validationWorker(report: (diagnostic: Diagnostic) => void, sink: () => 
   };
 }
 
-/** Round-trip settings are resolved once per worker and options, as conversion settings are. */
-const tripSettings = new Map<string, { conversion: ResolvedConversion; bracketing: BracketSettings }>();
+/** Bracketing settings of round trips, resolved once per worker and options, as conversion settings are. */
+const bracketSettings = new Map<string, BracketSettings>();
 
 /** Trees taken there and back by a runner of this task's own; its counts go with the task's last batch, and the main thread adds up the parts in order. */
 function tripWorker(work: TripWork, report: (diagnostic: Diagnostic) => void): Worker {
-  const key = JSON.stringify(work);
-  let found = tripSettings.get(key);
-  if (!found) {
-    found = { conversion: resolveConversionOptions({ ...work.conversion, lossless: work.lossless }), bracketing: resolveBracketOptions({ categories: work.categories, shape: work.shape, pos: work.pos }) };
-    tripSettings.set(key, found);
-  }
-  const { conversion, bracketing } = found;
+  const conversion = conversionOf({ ...work.conversion, lossless: work.lossless });
+  const key = JSON.stringify([work.categories, work.shape, work.pos]);
+  let bracketing = bracketSettings.get(key);
+  if (!bracketing) bracketSettings.set(key, (bracketing = resolveBracketOptions({ categories: work.categories, shape: work.shape, pos: work.pos })));
   const runner = new BracketRoundTrip(conversion.settings, bracketing, work.examples, 0, work.countPunctuation, conversion.lossless);
   const leftOut: string[] = [];
   const tally = { read: 0 };
@@ -123,16 +120,10 @@ function runStretch(task: StretchTask): StretchEvent[] {
   return worker.stretch(task);
 }
 
-/** Scorers' settings, resolved once per worker and options. */
-const scoreSettings = new Map<string, ResolvedConversion>();
-
 /** Pairs of a tree and its gold sentence scored by a scorer of this task's own; the main thread adds up the parts. */
 export function scoreGoldPairs(work: PairWork, pairs: Iterable<GoldPair>): ScorePart {
-  const key = JSON.stringify(work.conversion);
-  let found = scoreSettings.get(key);
-  if (!found) scoreSettings.set(key, (found = resolveConversionOptions(work.conversion)));
   const { unscored } = work;
-  const scorer = new ConversionScorer(found.settings, work.countPunctuation, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
+  const scorer = new ConversionScorer(conversionOf(work.conversion).settings, work.countPunctuation, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
   for (const pair of pairs) scorer.add(pair);
   return scorer.part();
 }

@@ -144,8 +144,9 @@ async function scoreHeads(files: string[], options: Record<string, unknown>, io:
     if (jobs > 1 && bracketed && typeof options.report !== 'string') {
       // Trees and gold are read and paired here, in order; the pairs are converted and scored on threads.
       const pairing = emptyTally();
-      const scorer = new ConversionScorer(settings, countPunctuation, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
-      const pairs = pairWithGold(treeStream, goldStream, settings.traces, report, pairing, unscored ? unscoredTest(unscored.key, unscored.values) : undefined);
+      const skip = unscored ? unscoredTest(unscored.key, unscored.values) : undefined;
+      const scorer = new ConversionScorer(settings, countPunctuation, skip);
+      const pairs = pairWithGold(treeStream, goldStream, settings.traces, report, pairing, skip);
       await scorePairsOnThreads(pairs, scorer, { conversion: namedConversion(options), countPunctuation, read: bracketedReadOptions(options), ...(unscored ? { unscored } : {}) }, jobs);
       result = { ...scorer.result(), pairing };
     } else {

@@ -5,13 +5,12 @@ import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
 import { readXmlGraphs } from '../../formats/xml-graph/read-xml-graph.js';
 import type { Tree } from '../../model/constituency.js';
 import { TreeSink, treeOutputFormat } from '../tree-output.js';
-import { formatOf } from '../input-format.js';
 import { addJobsOption, jobsOf } from '../jobs-option.js';
 import { addBracketedReadOptions, addTreeFormatOption, bracketedReadOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
 import { checkInputs, openInputs, Output, type CliIO } from '../io.js';
 import type { InputFormat } from '../input-format.js';
-import { readInputs, readTreeBatchesOf } from '../read-trees.js';
+import { bracketedOnThreads, readInputs, readTreeBatchesOf } from '../read-trees.js';
 import { addListingOptions, closingLine, listingOf, plural, ProblemPrinter } from '../print-problems.js';
 
 export function registerRewrite(program: Command, io: CliIO, done: (result: CommandResult) => void): void {
@@ -54,15 +53,8 @@ async function rewrite(files: string[], options: Record<string, unknown>, io: Cl
     if (jobs > 1 && format === 'bracketed') {
       const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'rewrite', traces, layout }, report, tally);
       try {
-        const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string | Tree> {
-          if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
-            yield* parallel.run(pieces, name);
-            return;
-          }
-          // An XML input is rewritten here, after everything before it.
-          yield* parallel.drain();
-          yield* readXmlGraphs(pieces, { file: name }, report);
-        };
+        // An XML input is rewritten here, after everything before it.
+        const read = bracketedOnThreads(parallel, inputs, options.from as InputFormat | undefined, (pieces, name) => readXmlGraphs(pieces, { file: name }, report));
         for await (const item of readInputs(inputs, read, io)) {
           if (typeof item === 'string') await sink.writeText(item);
           else await writeOne(item);

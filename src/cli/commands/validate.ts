@@ -6,9 +6,9 @@ import { BracketedValidator, type ValidationSummary } from '../../validate/valid
 import { ConlluValidator, type ConlluSummary } from '../../validate/validate-conllu.js';
 import { addBracketedReadOptions, bracketedReadOptions, refuseIgnored, treeReadingOptions } from '../bracketed-options.js';
 import { ExitCode, type CommandResult } from '../exit-codes.js';
-import { commonFormat, formatOf, inputFormats, type InputFormat } from '../input-format.js';
+import { commonFormat, inputFormats, type InputFormat } from '../input-format.js';
 import { checkInputs, describeError, openInputs, Output, type CliIO } from '../io.js';
-import { readInputs, readTreesOf } from '../read-trees.js';
+import { bracketedOnThreads, readInputs, readTreesOf } from '../read-trees.js';
 import { ParallelBatches } from '../../api/parallel/parallel-batches.js';
 import type { DoneBatch } from '../../api/parallel/tasks.js';
 import { readXmlGraphs } from '../../formats/xml-graph/read-xml-graph.js';
@@ -161,19 +161,14 @@ async function validate(files: string[], options: Record<string, unknown>, io: C
         };
         const parallel = new ParallelBatches(jobs, bracketedReadOptions(options), { kind: 'validate' }, validator.report, {}, take, nextInput(() => validator.startFile()));
         try {
-          const read = async function* (pieces: AsyncIterable<string>, name: string): AsyncGenerator<string> {
-            if (formatOf(inputs.find((input) => input.name === name)!, options.from as InputFormat | undefined) !== 'xml') {
-              yield* parallel.run(pieces, name);
-              return;
-            }
-            yield* parallel.drain();
+          const read = bracketedOnThreads(parallel, inputs, options.from as InputFormat | undefined, async function* (pieces, name) {
             nextInput(() => validator.startFile())();
             for await (const tree of readXmlGraphs(pieces, { file: name }, validator.report)) {
               drain(tree.position?.start ?? 0);
               validator.check(tree);
               await flush(PIECE);
             }
-          };
+          });
           for await (const _ of readInputs(inputs, read, io)) await flush(PIECE);
           for await (const _ of parallel.drain()) await flush(PIECE);
         } finally {
