@@ -1,4 +1,4 @@
-#!/usr/bin/env -S node --min-semi-space-size=16
+#!/usr/bin/env -S node --min-semi-space-size=16 --heap-growing-percent=100
 import { runCli } from '../cli/index.js';
 
 // A reader that closes the pipe early (`| head`) is not an error of ours: what is written after it

@@ -24,6 +24,13 @@ export class WorkerPool {
   /** The worker's module; it exists once built (running from the TypeScript sources there is none to start). */
   static readonly module = new URL('./worker.js', import.meta.url);
 
+  /**
+   * Tasks each thread holds at once: the one it works on and the next, posted
+   * to it already, so that it need not wait for the main thread (busy with its
+   * own share) to hand over the next task.
+   */
+  static readonly queued = 2;
+
   static get available(): boolean {
     return existsSync(fileURLToPath(WorkerPool.module));
   }
@@ -31,10 +38,9 @@ export class WorkerPool {
   constructor(
     readonly threads: number,
     /**
-     * The young generation of each thread, in MB. Trees are short-lived: one as large as the
-     * command gives its main thread (--min-semi-space-size=16 in the bin) spares most collections
-     * in conversion; work on CoNLL-U sentences allocates less and does as well with half, which
-     * keeps two jobs within 150 MB.
+     * The young generation of each thread, in MB. Pairs scored build whole trees and gold
+     * sentences and keep a large one; tasks of a few KiB of trees or sentences do as well with
+     * half (measured: the same time, some 10 MB less at two jobs).
      */
     youngMb = 16,
   ) {
@@ -43,7 +49,7 @@ export class WorkerPool {
       minThreads: threads,
       maxThreads: threads,
       // Tasks are queued by the caller, in order and few at a time; the pool needs no queue limit of its own.
-      concurrentTasksPerWorker: 1,
+      concurrentTasksPerWorker: WorkerPool.queued,
       resourceLimits: { maxYoungGenerationSizeMb: youngMb, maxOldGenerationSizeMb: 96 },
     });
   }
@@ -85,10 +91,15 @@ export class SharedJobs {
 
   /** Does a task: `here` on this thread, or `there` on a free worker. */
   take<T>(here: () => T, there: (pool: WorkerPool) => Promise<T>): T | Promise<T> {
-    if (this.jobs === 1 || this.given++ === 0 || this.busy >= this.jobs - 1) return here();
+    if (this.jobs === 1 || this.given++ === 0 || this.busy >= WorkerPool.queued * (this.jobs - 1)) return here();
     this.pool ??= new WorkerPool(this.jobs - 1, this.youngMb);
     this.busy++;
     return there(this.pool).finally(() => this.busy--);
+  }
+
+  /** Lets the event loop turn once, so that tasks the workers finished are counted as done before the next is shared out. */
+  async settle(): Promise<void> {
+    if (this.busy > 0) await new Promise<void>((resolve) => setImmediate(resolve));
   }
 
   async close(): Promise<void> {
