@@ -40,6 +40,33 @@ export interface Diagnostic {
 /** Where passes send what they find. */
 export type Report = (diagnostic: Diagnostic) => void;
 
+/** Where a problem stands in its file, without what the problem is: a diagnostic is built from it only when needed. */
+export interface Place {
+  offset: number;
+  line: number;
+  column: number;
+  end: Point;
+  excerpt?: { text: string; column: number };
+}
+
+/**
+ * The place of a stretch of a file, line, column and excerpt taken from the
+ * index that covers it. Without `end` the stretch is the token that starts
+ * there: up to the next white space, at least one character, within its line.
+ */
+export function placeAt(lines: LineIndex, offset: number, end?: number): Place {
+  const point = lines.pointAt(offset);
+  const to = end ?? tokenEnd(lines, offset);
+  return { offset, line: point.line, column: point.column, end: to <= offset ? point : lines.pointAt(to), excerpt: lines.lineAt(offset) };
+}
+
+/** Builds a diagnostic at a place found before (see placeAt). */
+export function diagnosePlace(code: DiagnosticCode, message: string, file: string, place: Place, notes?: string[]): Diagnostic {
+  const diagnostic: Diagnostic = { code, severity: diagnosticCodes[code].severity, message, file, ...place };
+  if (notes && notes.length > 0) diagnostic.notes = notes;
+  return diagnostic;
+}
+
 /**
  * Builds a diagnostic at a file offset, taking line, column and excerpt from
  * the index that covers it. Without `end` the problem covers the token that
@@ -52,21 +79,7 @@ export function diagnose(
   where: { file: string; offset: number; end?: number; lines: LineIndex },
   notes?: string[],
 ): Diagnostic {
-  const point = where.lines.pointAt(where.offset);
-  const end = where.end ?? tokenEnd(where.lines, where.offset);
-  const diagnostic: Diagnostic = {
-    code,
-    severity: diagnosticCodes[code].severity,
-    message,
-    file: where.file,
-    offset: where.offset,
-    line: point.line,
-    column: point.column,
-    end: end <= where.offset ? point : where.lines.pointAt(end),
-    excerpt: where.lines.lineAt(where.offset),
-  };
-  if (notes && notes.length > 0) diagnostic.notes = notes;
-  return diagnostic;
+  return diagnosePlace(code, message, where.file, placeAt(where.lines, where.offset, where.end), notes);
 }
 
 /**

@@ -1,34 +1,28 @@
 import { ownCopy } from '../model/own-copy.js';
-import { diagnose, type Diagnostic, type Report } from '../diagnostics/diagnostic.js';
+import { diagnosePlace, placeAt, type Diagnostic, type Place, type Report } from '../diagnostics/diagnostic.js';
 import type { Tree } from '../model/constituency.js';
 
 /**
  * What the identifier check needs of a tree, as plain data, so that a worker
- * thread can take it from the tree and the main thread check it in order.
+ * thread can take it from the tree and the main thread check it in order. The
+ * problem it may be is built only if it is one (most trees are not).
  */
 export interface TreeIdAt {
   file: string;
   /** The tree's identifier; absent for a tree without one. */
   id?: string;
-  /** Where the identifier stands, as a later duplicate's note names it (`file:line:column`). */
-  place?: string;
-  /** The problem this tree would be: a duplicate of an earlier id (its note is added then), or a missing id. */
-  problem?: Diagnostic;
+  /** Where the identifier stands (the whole tree, for a tree without one); absent for a tree without a place in a source. */
+  place?: Place;
 }
 
 /** The identifier data of a tree (nothing to check for a tree without a place in a source). */
 export function treeIdOf(tree: Tree): TreeIdAt {
   const file = tree.file ?? '-';
   if (!tree.source || !tree.position) return { file };
-  if (tree.id === undefined) {
-    const problem = diagnose('missing-id', 'tree has no identifier, unlike other trees of its file', { file, offset: tree.position.start, end: tree.position.end, lines: tree.source });
-    return { file, problem };
-  }
+  if (tree.id === undefined) return { file, place: placeAt(tree.source, tree.position.start, tree.position.end) };
   const offset = tree.idPosition?.start ?? tree.position.start;
   const end = tree.idPosition?.end ?? tree.position.end;
-  const here = tree.source.pointAt(offset);
-  const problem = diagnose('duplicate-id', `identifier "${tree.id}" was already used`, { file, offset, end, lines: tree.source });
-  return { file, id: tree.id, place: `${file}:${here.line}:${here.column}`, problem };
+  return { file, id: tree.id, place: placeAt(tree.source, offset, end) };
 }
 
 /**
@@ -52,10 +46,13 @@ export class SentenceIdCheck {
   /** The check of one tree, from its identifier data, in input order. */
   checkAt(at: TreeIdAt): void {
     if (at.file !== this.file) this.startFile(at.file);
-    if (!at.problem) return;
+    const place = at.place;
+    if (!place) return;
     if (at.id === undefined) {
-      if (this.fileHasIds) this.report(at.problem);
-      else if (this.waiting.length < 1000) this.waiting.push(at.problem);
+      if (!this.fileHasIds && this.waiting.length >= 1000) return;
+      const problem = diagnosePlace('missing-id', 'tree has no identifier, unlike other trees of its file', at.file, place);
+      if (this.fileHasIds) this.report(problem);
+      else this.waiting.push(problem);
       return;
     }
     if (!this.fileHasIds) {
@@ -66,10 +63,10 @@ export class SentenceIdCheck {
     const first = this.seen.get(at.id);
     if (first === undefined) {
       // A copy: the identifier read is a slice of the input, which a kept slice would keep whole.
-      this.seen.set(ownCopy(at.id), at.place!);
+      this.seen.set(ownCopy(at.id), `${at.file}:${place.line}:${place.column}`);
       return;
     }
-    this.report({ ...at.problem, notes: [`first used at ${first}`] });
+    this.report(diagnosePlace('duplicate-id', `identifier "${at.id}" was already used`, at.file, place, [`first used at ${first}`]));
   }
 
   private startFile(file: string): void {
