@@ -31,7 +31,8 @@ export function treeIdOf(tree: Tree): TreeIdAt {
  * have one. Holds one entry per identifier, not the trees.
  */
 export class SentenceIdCheck {
-  private readonly seen = new Map<string, string>();
+  /** Where each identifier was first used: its file, line and column (kept as numbers, not as a joined string, for each of tens of thousands of trees). */
+  private readonly seen = new Map<string, { file: string; line: number; column: number }>();
   private file: string | undefined;
   private fileHasIds = false;
   /** Trees without an identifier met before the first identifier of their file. */
@@ -63,10 +64,11 @@ export class SentenceIdCheck {
     const first = this.seen.get(at.id);
     if (first === undefined) {
       // A copy: the identifier read is a slice of the input, which a kept slice would keep whole.
-      this.seen.set(ownCopy(at.id), `${at.file}:${place.line}:${place.column}`);
+      this.seen.set(ownCopy(at.id), { file: at.file, line: place.line, column: place.column });
       return;
     }
-    this.report(diagnosePlace('duplicate-id', `identifier "${at.id}" was already used`, at.file, place, [`first used at ${first}`]));
+    const firstAt = `${first.file}:${first.line}:${first.column}`;
+    this.report(diagnosePlace('duplicate-id', `identifier "${at.id}" was already used`, at.file, place, [`first used at ${firstAt}`]));
   }
 
   private startFile(file: string): void {
