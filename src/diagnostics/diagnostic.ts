@@ -41,13 +41,7 @@ export interface Diagnostic {
 export type Report = (diagnostic: Diagnostic) => void;
 
 /** Where a problem stands in its file, without what the problem is: a diagnostic is built from it only when needed. */
-export interface Place {
-  offset: number;
-  line: number;
-  column: number;
-  end: Point;
-  excerpt?: { text: string; column: number };
-}
+export type Place = Pick<Diagnostic, 'offset' | 'line' | 'column' | 'end' | 'excerpt'>;
 
 /**
  * The place of a stretch of a file, line, column and excerpt taken from the

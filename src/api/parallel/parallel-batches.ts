@@ -1,7 +1,7 @@
 import type { Diagnostic, Report } from '../../diagnostics/diagnostic.js';
 import type { BracketedReadOptions } from '../../formats/bracketed/read-options.js';
 import { TreeCutter, type CutBatch } from '../../formats/bracketed/tree-batches.js';
-import { SharedJobs } from './pool.js';
+import { InOrder, SharedJobs } from './pool.js';
 import run from './worker.js';
 import type { DoneBatch, TaskResult, Work } from './tasks.js';
 
@@ -19,12 +19,10 @@ const SLICE = 4 * 1024;
 /** What happened, in input order: a problem of the cutting, a batch built, a batch converted. */
 type Event = { kind: 'file'; file: string } | { kind: 'problem'; diagnostic: Diagnostic } | { kind: 'built'; batch: number } | { kind: 'done'; batch: number };
 
-/** A run of events and the task converting their batches; the result is awaited in turn. */
+/** A run of events and what the task converting their batches gave (no task for a run without batches). */
 interface Group {
   events: Event[];
-  result: Promise<TaskResult> | undefined;
-  /** The result has come: the group can be emitted without waiting. */
-  ready: boolean;
+  result: TaskResult | undefined;
 }
 
 /**
@@ -39,7 +37,7 @@ interface Group {
 export class ParallelBatches {
   /** The main thread and the worker threads, which start when a second task comes: a small input never pays for starting threads. */
   private readonly shared: SharedJobs;
-  private readonly queue: Group[] = [];
+  private readonly queue = new InOrder<Group>();
   private readonly inFlight: number;
   /** Files whose word without a lemma part has been reported: once per file, as when reading on one thread. */
   private readonly lemmaWarned = new Set<string>();
@@ -87,10 +85,9 @@ export class ParallelBatches {
     const submit = () => {
       if (events.length === 0) return;
       const task = { work: this.work, read: { ...this.read, file }, batches };
+      const done = events;
       const taken = batches.length === 0 ? undefined : this.shared.take(() => run(task) as TaskResult, (pool) => pool.run(task));
-      const group: Group = { events, result: taken && Promise.resolve(taken), ready: !(taken instanceof Promise) };
-      if (taken instanceof Promise) void taken.then(() => (group.ready = true), () => undefined);
-      this.queue.push(group);
+      this.queue.push(taken instanceof Promise ? taken.then((result) => ({ events: done, result })) : { events: done, result: taken });
       events = [];
       batches = [];
       size = 0;
@@ -101,8 +98,7 @@ export class ParallelBatches {
         if (size >= TASK_SIZE) {
           await this.shared.settle();
           submit();
-          // Results leave as soon as they are ready, in order: held longer, they would outlive the young generation.
-          while (this.queue.length > this.inFlight || this.queue[0]?.ready) yield* await this.emitFirst();
+          while (this.queue.length > this.inFlight || this.queue.firstReady) yield* await this.emitFirst();
         }
       }
     }
@@ -127,10 +123,9 @@ export class ParallelBatches {
    * enough to be made in the old generation, which only a full collection frees.
    */
   private async emitFirst(): Promise<string[]> {
-    const group = this.queue.shift()!;
-    const result = group.result ? await group.result : undefined;
+    const { events, result } = await this.queue.shift();
     const text: string[] = [];
-    for (const event of group.events) {
+    for (const event of events) {
       if (event.kind === 'file') this.onFile?.(event.file);
       else if (event.kind === 'problem') this.emit(event.diagnostic);
       else if (event.kind === 'built') for (const diagnostic of result!.batches[event.batch]!.built) this.emit(diagnostic);

@@ -1,7 +1,7 @@
 import type { GoldPair } from '../../evaluate/pair-with-gold.js';
 import type { ConversionScorer, ScorePart } from '../../evaluate/score-conversion.js';
 import type { DependencySentence } from '../../model/dependency.js';
-import { SharedJobs } from './pool.js';
+import { InOrder, SharedJobs } from './pool.js';
 import { scoreGoldPairs } from './worker.js';
 import type { PairWork, TravellingPair } from './tasks.js';
 
@@ -18,7 +18,7 @@ const TASK_WORDS = 4096;
  */
 export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer: ConversionScorer, work: PairWork, jobs: number): Promise<void> {
   const shared = new SharedJobs(jobs);
-  const queue: Array<ScorePart | Promise<ScorePart>> = [];
+  const queue = new InOrder<ScorePart>();
   let batch: GoldPair[] = [];
   let words = 0;
   const submit = () => {
@@ -33,11 +33,12 @@ export async function scorePairsOnThreads(pairs: AsyncIterable<GoldPair>, scorer
       batch.push(pair);
       words += pair.gold.lines.length;
       if (words < TASK_WORDS) continue;
+      await shared.settle();
       submit();
-      while (queue.length > shared.jobs * 2) scorer.merge(await queue.shift()!);
+      while (queue.length > shared.jobs * 2 || queue.firstReady) scorer.merge(await queue.shift());
     }
     submit();
-    while (queue.length > 0) scorer.merge(await queue.shift()!);
+    while (queue.length > 0) scorer.merge(await queue.shift());
   } finally {
     await shared.close();
   }

@@ -1,6 +1,6 @@
 import { openConlluReader, type ConlluReader } from '../../formats/conllu/read-conllu.js';
 import { SentenceCutter, type Stretch } from '../../formats/conllu/sentence-cutter.js';
-import { SharedJobs } from './pool.js';
+import { InOrder, SharedJobs } from './pool.js';
 import { SentenceWorker, type SentenceWork, type StretchEvent, type StretchTask } from './sentence-work.js';
 
 /**
@@ -17,7 +17,7 @@ export class ParallelSentences {
   /** Sentence work allocates less than conversion: workers with an 8 MB young generation keep two jobs within 150 MB. */
   private readonly shared: SharedJobs;
   private readonly local: SentenceWorker;
-  private readonly queue: Array<Promise<StretchEvent[]> | StretchEvent[]> = [];
+  private readonly queue = new InOrder<StretchEvent[]>();
   private readonly inFlight: number;
 
   constructor(
@@ -49,17 +49,18 @@ export class ParallelSentences {
     };
     for await (const piece of pieces) {
       for (const stretch of cutter.push(piece)) {
+        await this.shared.settle();
         take(stretch, false);
-        while (this.queue.length > this.inFlight) yield* await this.queue.shift()!;
+        while (this.queue.length > this.inFlight || this.queue.firstReady) yield* await this.queue.shift();
       }
     }
     take(cutter.end(), true);
-    while (this.queue.length > this.inFlight) yield* await this.queue.shift()!;
+    while (this.queue.length > this.inFlight) yield* await this.queue.shift();
   }
 
   /** The events of every stretch still in flight, in order. */
   async *drain(): AsyncGenerator<StretchEvent> {
-    while (this.queue.length > 0) yield* await this.queue.shift()!;
+    while (this.queue.length > 0) yield* await this.queue.shift();
   }
 
   async close(): Promise<void> {

@@ -97,12 +97,48 @@ export class SharedJobs {
     return there(this.pool).finally(() => this.busy--);
   }
 
-  /** Lets the event loop turn once, so that tasks the workers finished are counted as done before the next is shared out. */
+  /**
+   * Lets the event loop turn once, so that tasks the workers finished are
+   * counted as done before the next is shared out: a caller that reads and
+   * cuts without waiting would otherwise see its workers busy long after they
+   * are done, and do their share itself. Call it before each `take`.
+   */
   async settle(): Promise<void> {
     if (this.busy > 0) await new Promise<void>((resolve) => setImmediate(resolve));
   }
 
   async close(): Promise<void> {
     await this.pool?.close();
+  }
+}
+
+/**
+ * Results of tasks in the order the tasks were given, each known to have come
+ * or not without waiting for it: a result that has come leaves at once, since
+ * one held while others are done would outlive two young collections and be
+ * moved to the old generation, which only a full collection frees.
+ */
+export class InOrder<T> {
+  private readonly items: Array<{ value: T | Promise<T>; ready: boolean }> = [];
+
+  get length(): number {
+    return this.items.length;
+  }
+
+  /** The first result has come. */
+  get firstReady(): boolean {
+    return this.items[0]?.ready ?? false;
+  }
+
+  push(value: T | Promise<T>): void {
+    const item = { value, ready: !(value instanceof Promise) };
+    // A failure is seen by whoever takes the result; here it only must not go unhandled.
+    if (value instanceof Promise) void value.then(() => (item.ready = true), () => undefined);
+    this.items.push(item);
+  }
+
+  /** The first result, once it has come. */
+  async shift(): Promise<T> {
+    return await this.items.shift()!.value;
   }
 }
